@@ -1,0 +1,85 @@
+/**
+ * Symmetric positive semi-definite matrices in variable-band (skyline) row storage, factored as
+ * L·D·Lᵀ in place with a pivot test. Row i keeps columns first[i]..i in `band[i*W + (j - i + bw)]`,
+ * W = bw + 1; entries left of first[i] are zero and stay zero (no fill outside the profile).
+ */
+
+/** Shape of a banded matrix. */
+export interface BandShape {
+  /** Order of the matrix. */
+  readonly n: number;
+  /** Half-bandwidth (largest i − j with K[i][j] ≠ 0). */
+  readonly bw: number;
+  /** First stored column of each row. */
+  readonly first: Int32Array;
+}
+
+/**
+ * Factor in place. On return the strict lower band holds L, `d` holds the pivots (0 where a pivot
+ * collapsed) and `invD` their inverses (0 where collapsed).
+ * A pivot collapses when it falls to `relTol` × its original diagonal or below: each such pivot is one
+ * mechanism (a direction with no stiffness).
+ * @param diag - the original diagonal K[i][i], read for the pivot test
+ * @returns the number of collapsed pivots
+ */
+export function factorBandLdlt(
+  shape: BandShape,
+  band: Float64Array,
+  diag: Float64Array,
+  d: Float64Array,
+  invD: Float64Array,
+  relTol: number,
+): number {
+  const { n, bw, first } = shape;
+  const W = bw + 1;
+  let collapsed = 0;
+  for (let i = 0; i < n; i++) {
+    const ri = i * W + bw - i; // band[ri + j] = K[i][j]
+    const j0 = first[i];
+    for (let j = j0; j < i; j++) {
+      const rj = j * W + bw - j;
+      const k0 = j0 > first[j] ? j0 : first[j];
+      let s = band[ri + j];
+      for (let k = k0; k < j; k++) s -= band[ri + k] * band[rj + k];
+      band[ri + j] = s; // u_ij = L_ij · d_j for now
+    }
+    let dii = band[ri + i];
+    for (let j = j0; j < i; j++) {
+      const u = band[ri + j];
+      const l = u * invD[j];
+      dii -= u * l;
+      band[ri + j] = l;
+    }
+    if (dii <= relTol * diag[i]) {
+      collapsed++;
+      d[i] = 0;
+      invD[i] = 0;
+    } else {
+      d[i] = dii;
+      invD[i] = 1 / dii;
+    }
+    band[ri + i] = d[i];
+  }
+  return collapsed;
+}
+
+/**
+ * Solve K·u = f with a factor from {@link factorBandLdlt} (all pivots kept). `u` may alias `f`.
+ */
+export function solveBandLdlt(shape: BandShape, band: Float64Array, invD: Float64Array, f: Float64Array, u: Float64Array): void {
+  const { n, bw, first } = shape;
+  const W = bw + 1;
+  if (u !== f) u.set(f.subarray(0, n));
+  for (let i = 0; i < n; i++) {
+    const ri = i * W + bw - i;
+    let s = u[i];
+    for (let j = first[i]; j < i; j++) s -= band[ri + j] * u[j];
+    u[i] = s;
+  }
+  for (let i = 0; i < n; i++) u[i] *= invD[i];
+  for (let i = n - 1; i >= 0; i--) {
+    const ri = i * W + bw - i;
+    const ui = u[i];
+    for (let j = first[i]; j < i; j++) u[j] -= band[ri + j] * ui;
+  }
+}
