@@ -1,0 +1,20 @@
+#!/usr/bin/env bash
+# The whole test suite: install what is missing, lint (import boundaries), type-check, unit and
+# integration tests, then print one closing line "tests: N passed, N failed, N skipped".
+set -uo pipefail
+cd "$(dirname "$0")/.."
+bash scripts/ensure.sh || exit 1
+mkdir -p .data
+status=0
+echo "== lint (eslint, import boundaries)"; npx eslint . || status=1
+echo "== type-check (tsc; shared/ without Node types)"; npm run -s typecheck || status=1
+echo "== tests (vitest)"
+npx vitest run --reporter=default --reporter=json --outputFile=.data/vitest.json || status=1
+node -e '
+  const fs = require("fs");
+  let r = { numPassedTests: 0, numFailedTests: 1, numPendingTests: 0, numTodoTests: 0 };
+  try { r = JSON.parse(fs.readFileSync(".data/vitest.json", "utf8")); } catch {}
+  const extra = Number(process.argv[1]);
+  console.log(`tests: ${r.numPassedTests} passed, ${r.numFailedTests + extra} failed, ${r.numPendingTests + r.numTodoTests} skipped`);
+' "$status"
+exit $status
