@@ -4,6 +4,7 @@ import { Command, CommanderError } from 'commander';
 import { InputError } from '../shared/errors';
 import { ExitCode, processIo, UsageError, VERSION, type Io } from './context';
 import { registerAnalyze } from './commands/analyze';
+import { registerSweep } from './commands/sweep';
 
 /** Build the command table. */
 export function buildProgram(io: Io): Command {
@@ -14,6 +15,7 @@ export function buildProgram(io: Io): Command {
     .configureOutput({ writeOut: (s) => io.out(s), writeErr: (s) => io.err(s) })
     .exitOverride();
   registerAnalyze(program, io);
+  registerSweep(program, io);
   return program;
 }
 

@@ -26,7 +26,7 @@ export function geometryFindings(st: Structure, c: Base): Finding[] {
   const J = (idx: readonly number[]) => idx.map((i) => st.nodeIds[i]);
   const M = (idx: readonly number[]) => idx.map((e) => st.memberIds[e]);
   if (c.countRule < 0) {
-    out.push({ level: 'error', code: 'count-short', message: `Maxwell's count is short: m + r − 2j = ${c.countRule}; at least ${-c.countRule} more member(s) or reaction component(s) are needed.` });
+    out.push({ level: 'error', code: 'count-short', message: `Maxwell's count is short: m + r − 2j = −${-c.countRule}; at least ${-c.countRule} more member(s) or reaction component(s) are needed.` });
   } else if (c.critical) {
     out.push({ level: 'error', code: 'critical-form', message: `The count is satisfied (m + r − 2j = ${c.countRule}) yet the geometry leaves ${c.mechanisms} mechanism(s): some members or reactions are dependent.` });
   }
