@@ -1,0 +1,68 @@
+/**
+ * Assemble a `TrussFamily` from its pattern: the builder of its joints and members, the two
+ * outlines that place them, and its parameter rules. Lengths in metres.
+ */
+import { fillLayout, type LaidOutTopology, type Outline } from './builder';
+import { SLOPE, checkPanels, checkParams, num, supportsKey } from './params';
+import type { FamilyTopology, ParamSpec, Params, TrussFamily } from './types';
+
+/** What a family file states; everything else is common. */
+export interface FamilyDef {
+  id: string;
+  name: string;
+  category: TrussFamily['category'];
+  summary: string;
+  params: readonly ParamSpec[];
+  /** The `panels` parameter and its parity or set rule. */
+  panels: ParamSpec;
+  panelRule?: 'even' | 'odd' | readonly number[];
+  /** The span parameter (x = xi · span). */
+  span: ParamSpec;
+  /** Family-specific checks beyond ranges and the panel rule. */
+  extraCheck?: (p: Params) => string[];
+  /** Topology-changing parameters beyond panels and supports, as a key fragment. */
+  extraKey?: (p: Params) => string;
+  /** Build the topology for a valid, whole panel count. */
+  build: (p: Params, panels: number) => LaidOutTopology;
+  /** Write the shape constants the outlines read (depth, rise...) into k (length 8). No allocation. */
+  prepare: (p: Params, k: Float64Array) => void;
+  /** Height of the top and bottom outlines, metres, at xi = x / span. */
+  top: Outline;
+  bottom: Outline;
+}
+
+/** The family object for a definition. */
+export function defineFamily(d: FamilyDef): TrussFamily {
+  // Shape constants, read once per variant rather than once per joint.
+  const k = new Float64Array(8);
+  const supports = d.params.find((s) => s.name === 'supports');
+  return {
+    id: d.id,
+    name: d.name,
+    category: d.category,
+    summary: d.summary,
+    params: d.params,
+    check(p: Params): string[] {
+      // A slope above 0 replaces rise, whose own range then does not apply (checkRise covers it).
+      const slopeSet = d.params.includes(SLOPE) && num(p, SLOPE) > 0;
+      const basic = checkParams(slopeSet ? d.params.filter((s) => s.name !== 'rise') : d.params, p);
+      if (basic.length) return basic;
+      return [...(d.panelRule ? checkPanels(p, d.panels, d.panelRule) : []), ...(d.extraCheck ? d.extraCheck(p) : [])];
+    },
+    topologyKey(p: Params): string {
+      const parts = [d.id, `n=${num(p, d.panels)}`];
+      if (supports) parts.push(supportsKey(p, supports));
+      if (d.extraKey) parts.push(d.extraKey(p));
+      return parts.join('|');
+    },
+    topology(p: Params): FamilyTopology {
+      const n = num(p, d.panels);
+      if (!Number.isInteger(n) || n < (d.panels.min ?? 1)) throw new RangeError(`${d.id}: panels must be a whole number ≥ ${d.panels.min} (got ${n})`);
+      return d.build(p, n);
+    },
+    geometry(p: Params, topo: FamilyTopology, x: Float64Array, y: Float64Array): void {
+      d.prepare(p, k);
+      fillLayout(topo, num(p, d.span), k, d.top, d.bottom, x, y);
+    },
+  };
+}
