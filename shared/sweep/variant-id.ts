@@ -1,0 +1,126 @@
+/**
+ * Stable ids: FNV-1a 64-bit over a canonical text, as 16 hex digits, the same on every
+ * machine. Numbers are written with 12 significant digits, so that 0.1 + 0.2 and 0.3 give
+ * the same id; keys are sorted by UTF-16 code units (never by locale).
+ */
+import type { Study } from '../schemas/study';
+import type { Params } from './types';
+
+/**
+ * Canonical text of a number: `Number(x.toPrecision(12)).toString()`; -0 reads 0.
+ */
+export function canonicalNumber(x: number): string {
+  // whole numbers below 1e12 print the same either way; skipping toPrecision saves time in a sweep
+  if (Number.isInteger(x) && Math.abs(x) < 1e12) return x === 0 ? '0' : String(x);
+  return Number.isFinite(x) ? Number(x.toPrecision(12)).toString() : String(x);
+}
+
+/**
+ * FNV-1a 64-bit hash of the UTF-8 bytes of `text`, computed in two 32-bit halves.
+ * @returns 16 lowercase hex digits
+ */
+export function fnv1a64(text: string): string {
+  // offset basis 0xcbf29ce484222325; prime 0x100000001b3 = 2^40 + 0x1b3, so
+  // (hi·2^32 + lo)·prime mod 2^64 = lo·0x1b3 + (hi·0x1b3 + lo·2^8)·2^32
+  let hi = 0xcbf29ce4;
+  let lo = 0x84222325;
+  let pending = 0; // UTF-8 bytes of the current code point still to hash, low byte first
+  let count = 0;
+  for (let i = 0; i < text.length || count > 0; ) {
+    let byte: number;
+    if (count > 0) {
+      byte = pending & 0xff;
+      pending >>>= 8;
+      count--;
+    } else {
+      let c = text.charCodeAt(i++);
+      if (c < 0x80) byte = c;
+      else {
+        if (c >= 0xd800 && c <= 0xdfff) {
+          const d = c <= 0xdbff && i < text.length ? text.charCodeAt(i) : 0;
+          if (d >= 0xdc00 && d <= 0xdfff) {
+            c = 0x10000 + ((c - 0xd800) << 10) + (d - 0xdc00);
+            i++;
+          } else c = 0xfffd; // a lone surrogate, encoded as U+FFFD like TextEncoder does
+        }
+        if (c < 0x800) {
+          byte = 0xc0 | (c >> 6);
+          pending = 0x80 | (c & 63);
+          count = 1;
+        } else if (c < 0x10000) {
+          byte = 0xe0 | (c >> 12);
+          pending = (0x80 | ((c >> 6) & 63)) | ((0x80 | (c & 63)) << 8);
+          count = 2;
+        } else {
+          byte = 0xf0 | (c >> 18);
+          pending = (0x80 | ((c >> 12) & 63)) | ((0x80 | ((c >> 6) & 63)) << 8) | ((0x80 | (c & 63)) << 16);
+          count = 3;
+        }
+      }
+    }
+    lo = (lo ^ byte) >>> 0;
+    const a = lo * 0x1b3; // < 2^41, exact in a double
+    hi = (Math.imul(hi, 0x1b3) + Math.floor(a / 4294967296) + (lo << 8)) >>> 0;
+    lo = a >>> 0;
+  }
+  return hi.toString(16).padStart(8, '0') + lo.toString(16).padStart(8, '0');
+}
+
+/**
+ * Canonical text of a variant: the family, then `key=value` for each parameter in sorted
+ * key order; numbers as `canonicalNumber`, strings JSON-quoted (so 6 and "6" differ).
+ * @param names - the parameters to include (default: every key of params)
+ */
+export function variantText(family: string, params: Readonly<Params>, names?: readonly string[]): string {
+  const keys = (names ? [...names] : Object.keys(params)).sort(byCodeUnit);
+  let text = JSON.stringify(family);
+  for (const k of keys) {
+    const v = params[k];
+    text += `;${k}=${typeof v === 'number' ? canonicalNumber(v) : JSON.stringify(v)}`;
+  }
+  return text;
+}
+
+/**
+ * Stable id of a variant from its family and parameters.
+ * @param names - the parameters that define the truss; pass `plan.paramNames` so that a
+ *   study's auxiliary names (used only in expressions) do not change the id
+ * @returns 16 lowercase hex digits
+ */
+export function variantId(family: string, params: Readonly<Params>, names?: readonly string[]): string {
+  return fnv1a64(variantText(family, params, names));
+}
+
+/**
+ * Canonical JSON: object keys sorted, numbers as `canonicalNumber`, undefined left out.
+ * @param keepOrder - object paths (`vary`, `derived`) whose key order carries meaning and is kept
+ */
+export function canonicalJson(value: unknown, keepOrder: ReadonlySet<string> = new Set(), path = ''): string {
+  if (value === null || typeof value === 'boolean') return String(value);
+  if (typeof value === 'number') return canonicalNumber(value);
+  if (typeof value === 'string') return JSON.stringify(value);
+  if (Array.isArray(value)) return `[${value.map((v, i) => canonicalJson(v, keepOrder, `${path}[${i}]`)).join(',')}]`;
+  if (typeof value === 'object') {
+    const obj = value as Record<string, unknown>;
+    const keys = Object.keys(obj).filter((k) => obj[k] !== undefined);
+    if (!keepOrder.has(path)) keys.sort(byCodeUnit);
+    const child = (k: string) => (path ? `${path}.${k}` : k);
+    return `{${keys.map((k) => `${JSON.stringify(k)}:${canonicalJson(obj[k], keepOrder, child(k))}`).join(',')}}`;
+  }
+  return 'null';
+}
+
+/**
+ * Hash of a study, to tell shards of different studies apart. Covers everything that can
+ * change a result or the order of variants; leaves out `$schema` and `description`. The key
+ * order of `vary` (order of the index) and `derived` (order of evaluation) is kept.
+ * @returns 16 lowercase hex digits
+ */
+export function studyHash(study: Study): string {
+  const { $schema: _schema, description: _description, ...rest } = study;
+  return fnv1a64(canonicalJson(rest, new Set(['vary', 'derived'])));
+}
+
+function byCodeUnit(a: string, b: string): number {
+  return a < b ? -1 : a > b ? 1 : 0;
+}
