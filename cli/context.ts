@@ -1,5 +1,7 @@
 // What a command gets from the program: where to write, and the errors that set exit codes.
 import { readFileSync } from 'node:fs';
+import { dirname, join } from 'node:path';
+import { fileURLToPath } from 'node:url';
 
 /** Output streams, replaceable in tests. */
 export interface Io {
@@ -28,5 +30,15 @@ export class ExitCode extends Error {
   }
 }
 
-/** Panelpoint's version, from package.json. */
-export const VERSION: string = (JSON.parse(readFileSync(new URL('../package.json', import.meta.url), 'utf8')) as { version: string }).version;
+/** Panelpoint's version, from the nearest package.json named panelpoint (sources or bundle). */
+export const VERSION: string = (() => {
+  for (let dir = dirname(fileURLToPath(import.meta.url)); ; dir = dirname(dir)) {
+    try {
+      const pkg = JSON.parse(readFileSync(join(dir, 'package.json'), 'utf8')) as { name?: string; version: string };
+      if (pkg.name === 'panelpoint') return pkg.version;
+    } catch {
+      // no package.json here: keep walking up
+    }
+    if (dirname(dir) === dir) return '0.0.0';
+  }
+})();

@@ -16,13 +16,15 @@ export function registerAnalyze(program: Command, io: Io): void {
     .description('Classify a truss (stable? determinate? where is it weak?) and compute member forces, reactions and displacements.')
     .argument('<file>', 'model file (JSON)')
     .option('--json', 'print the result as JSON (the contract CI jobs read)')
-    .option('-c, --combination <id...>', 'report only these combinations (or load cases)')
-    .option('-s, --section <members...>', 'method of sections: cut these members (comma-separated, up to three); repeat for more cuts')
+    .option('-c, --combination <ids>', 'report only these combinations or load cases (comma-separated; repeatable)', collect, [])
+    .option('-s, --section <members>', 'method of sections: cut these members (comma-separated, up to three); repeat for more cuts', collect, [])
     .option('--fail-on <what>', "exit 1 when the frame is 'unstable' (or 'critical')")
     .option('-o, --out <file>', 'also write the JSON result to this file (written whole or not at all)')
     .addHelpText('after', '\nExamples:\n  panelpoint analyze examples/models/depot-roof-r3.json\n  panelpoint analyze bridge.json --json --section TC4,D4,BC4\n')
     .action((file: string, opts: Options) => runAnalyze(file, opts, io));
 }
+
+const collect = (value: string, previous: string[]) => [...previous, value];
 
 function runAnalyze(file: string, opts: Options, io: Io): void {
   if (opts.failOn && !['unstable', 'critical'].includes(opts.failOn)) throw new UsageError(`--fail-on takes 'unstable' or 'critical', not '${opts.failOn}'`);
@@ -32,6 +34,10 @@ function runAnalyze(file: string, opts: Options, io: Io): void {
   const wanted = (opts.combination ?? []).flatMap((c) => c.split(',')).filter(Boolean);
   for (const id of wanted) if (!loadingIds.includes(id)) throw new UsageError(`--combination ${id}: the model has ${an.loadings.kind === 'combination' ? 'combinations' : 'load cases'} ${loadingIds.join(', ')}`);
   const cuts: { loading: string; result: SectionResult }[] = [];
+  if ((opts.section ?? []).length && !an.results.length) {
+    const why = an.classification.status === 'unstable' ? 'the frame is unstable, so it has no member forces to cut' : 'the model has no loads';
+    io.err(`note: --section ignored: ${why}\n`);
+  }
   for (const spec of opts.section ?? []) {
     const names = spec.split(',').map((s) => s.trim()).filter(Boolean);
     const idx = names.map((n) => {

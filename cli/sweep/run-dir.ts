@@ -36,9 +36,9 @@ export class ResultWriter {
     this.jsonl = openSync(join(dir, FILES.jsonl), 'a');
     this.csv = openSync(join(dir, FILES.csv), 'a');
   }
-  append(jsonl: string, csv: string): void {
-    if (jsonl) writeSync(this.jsonl, jsonl);
-    if (csv) writeSync(this.csv, csv);
+  append(jsonl: Uint8Array, csv: Uint8Array): void {
+    if (jsonl.length) writeSync(this.jsonl, jsonl);
+    if (csv.length) writeSync(this.csv, csv);
   }
   close(): void {
     closeSync(this.jsonl);

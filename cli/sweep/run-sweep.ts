@@ -6,7 +6,8 @@ import type { SweepBatch, SweepTask } from '../worker/sweep-task';
 import type { ResultWriter } from './run-dir';
 import type { Progress } from './progress';
 
-const workerFile = new URL('../worker/sweep-worker.mjs', import.meta.url).href;
+// The bundled worker when the CLI runs from its bundle (cli/bin/bundle.mjs), else the TypeScript one.
+const workerFile = process.env.PANELPOINT_WORKER_URL ?? new URL('../worker/sweep-worker.mjs', import.meta.url).href;
 
 export interface SweepDrive {
   task: Omit<SweepTask, 'start' | 'end'>;

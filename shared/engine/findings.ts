@@ -5,6 +5,7 @@
 import type { Structure } from './structure';
 import type { Classification } from './classify';
 import { reactionLines } from './reaction-lines';
+import { findPanels, stretches } from './panels';
 
 /** One finding about a frame. */
 export interface Finding {
@@ -58,6 +59,16 @@ export function geometryFindings(st: Structure, c: Base): Finding[] {
         : `Mechanism ${n + 1} moves joint(s) ${list(moving)}.`,
     });
   });
+  const panels = c.mechanismModes.length || c.selfStressStates.length ? findPanels(st) : [];
+  const name = (p: (typeof panels)[number]) => p.joints.map((i) => st.nodeIds[i]).join('–');
+  const sheared = panels.filter((p) => p.diagonals[0] < 0 && p.diagonals[1] < 0 && c.mechanismModes.some((m) => stretches(st, m.displacement, p.joints[0], p.joints[2]) || stretches(st, m.displacement, p.joints[1], p.joints[3])));
+  for (const p of sheared.slice(0, 6)) {
+    out.push({ level: 'error', code: 'panel-unbraced', joints: p.joints.map((i) => st.nodeIds[i]), message: `Panel ${name(p)} has no diagonal: the mechanism shears it. Add a diagonal across it.` });
+  }
+  const stressed = new Set(c.selfStressStates.flatMap((s) => s.members));
+  for (const p of panels.filter((q) => q.diagonals[0] >= 0 && q.diagonals[1] >= 0 && stressed.has(q.diagonals[0]) && stressed.has(q.diagonals[1])).slice(0, 6)) {
+    out.push({ level: 'info', code: 'panel-double-braced', members: M(p.diagonals), joints: p.joints.map((i) => st.nodeIds[i]), message: `Panel ${name(p)} has two diagonals (${M(p.diagonals).join(', ')}): one of them is redundant.` });
+  }
   const loose = J(c.rigidity.looseJoints);
   if (loose.length && c.mechanisms > 0) {
     out.push({ level: 'warning', code: 'under-braced', joints: loose, message: `Under-braced (pebble game): joint(s) ${list(loose)} are not rigidly tied to the supports.` });
@@ -69,7 +80,7 @@ export function geometryFindings(st: Structure, c: Base): Finding[] {
       return `${st.nodeIds[rc.node]}${st.supports[rc.support].kind === 'pin' ? (rc.angle === 0 ? '.x' : '.y') : ''}`;
     });
     const what = [ms.length ? `member(s) ${list(ms)}` : '', rs.length ? `reaction(s) at ${list(rs)}` : ''].filter(Boolean).join(' and ');
-    out.push({ level: 'info', code: 'self-stress', members: ms, message: `Self-stress state ${n + 1} runs through ${what}: any one of them can be released without losing stability.` });
+    out.push({ level: 'info', code: 'self-stress', members: ms, message: `Self-stress state ${n + 1} runs through ${what}: releasing any one of them removes this redundancy without adding a mechanism.` });
   });
   const over = M(c.rigidity.overBracedMembers);
   if (over.length) {

@@ -96,6 +96,13 @@ describe('classification of test frames', () => {
     expect(ss.members).toEqual(expect.arrayContaining(['D5', 'D5x']));
     expect(ss.members).not.toContain('D3');
     expect(c.redundantMembers.map((e) => st.memberIds[e])).toContain('D5x');
+    // Panel-level wording: the bare panel (between joints 1 and 2) and the doubly braced one (4–5).
+    const bare = c.findings.filter((f) => f.code === 'panel-unbraced');
+    expect(bare).toHaveLength(1);
+    expect([...bare[0].joints!].sort()).toEqual(['B1', 'B2', 'T1', 'T2']);
+    const dbl = c.findings.filter((f) => f.code === 'panel-double-braced');
+    expect(dbl).toHaveLength(1);
+    expect([...dbl[0].members!].sort()).toEqual(['D5', 'D5x']);
   });
 
   it('reports parallel and concurrent reactions, flat kinks, and special geometry', () => {
