@@ -38,7 +38,7 @@ class ByteSink {
       this.buf.copy(next, 0, 0, this.len);
       this.buf = next;
     }
-    this.len += this.buf.utf8Write(s, this.len);
+    this.len += this.buf.write(s, this.len, "utf8");
   }
   bytes(): Uint8Array {
     return new Uint8Array(this.buf.buffer, this.buf.byteOffset, this.len);
