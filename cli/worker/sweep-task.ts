@@ -2,7 +2,7 @@
 // JSON Lines and CSV rows as UTF-8 bytes with the batch's summary. The resolved study is cached per study hash.
 import { resolveStudy } from '../../shared/sweep/resolve-study';
 import { VariantEvaluator } from '../../shared/sweep/evaluate';
-import { csvRow, jsonLine, storedFigures } from '../../shared/sweep/record-format';
+import { formatRecord, storedFigures, type FormattedRecord } from '../../shared/sweep/record-format';
 import { addToSummary, emptySummary, type Objective, type SweepSummary } from '../../shared/sweep/summary';
 
 /** What the main thread sends. */
@@ -58,14 +58,16 @@ export function evaluateBatch(task: SweepTask): SweepBatch {
   const n = task.end - task.start;
   const jsonl = new ByteSink(Math.max(4096, n * 800));
   const csv = new ByteSink(Math.max(4096, n * 400));
+  const lines: FormattedRecord = { json: '', csv: '' };
   for (let i = task.start; i < task.end; i++) {
     const rec = ev.evaluate(i);
     if (!rec) {
       summary.filtered++;
       continue;
     }
-    jsonl.write(jsonLine(rec, names));
-    csv.write(csvRow(rec, names));
+    formatRecord(rec, names, lines);
+    jsonl.write(lines.json);
+    csv.write(lines.csv);
     addToSummary(summary, storedFigures(rec));
   }
   return { start: task.start, end: task.end, jsonl: jsonl.bytes(), csv: csv.bytes(), summary };

@@ -45,32 +45,63 @@ function csvText(s: string): string {
   return /[",\n\r]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s;
 }
 
-/** One CSV row (with newline); empty cells where a figure does not exist. */
-export function csvRow(r: VariantRecord, paramNames: readonly string[]): string {
-  let line = `${r.index},${r.id}`;
-  for (const n of paramNames) {
-    const v = r.params[n];
-    line += ',' + (typeof v === 'number' ? String(v) : csvText(String(v ?? '')));
+/** Both lines of one record, each ending in a newline. */
+export interface FormattedRecord { json: string; csv: string }
+
+// Ids of members, joints and combinations repeat across millions of lines: quote each once.
+const quoteCache = new Map<string, string>();
+function qc(s: string): string {
+  let v = quoteCache.get(s);
+  if (v === undefined) {
+    v = JSON.stringify(s);
+    if (quoteCache.size < 65536) quoteCache.set(s, v);
   }
-  const blank = (s: string) => (s === 'null' ? '' : s);
-  const stable = r.status === 'determinate' || r.status === 'indeterminate';
-  line += `,${r.status},${r.joints},${r.members},${r.reactions},${r.k},${r.s},${r.critical}`;
-  line += stable ? `,${r6(r.peakTension)},${r.peakTensionMember},${r.peakTensionCombination}` : ',,,';
-  line += stable ? `,${r6(r.peakCompression)},${r.peakCompressionMember},${r.peakCompressionCombination}` : ',,,';
-  line += stable ? `,${blank(r9(r.maxDisplacement))},${r.maxDisplacementNode},${r.maxDisplacementCombination}` : ',,,';
-  line += `,${stable ? blank(r3(r.spanOverDeflection)) : ''},${csvText(r.reason)}\n`;
-  return line;
+  return v;
 }
 
-/** One JSON line (with newline). Unstable and failed variants carry null peaks and a reason. */
-export function jsonLine(r: VariantRecord, paramNames: readonly string[]): string {
-  let params = '';
-  for (let i = 0; i < paramNames.length; i++) params += `${i ? ',' : ''}${q(paramNames[i])}:${value(r.params[paramNames[i]])}`;
+/**
+ * Format a record as a JSON line and a CSV row at once, converting each number to text once.
+ * Unstable and failed variants carry null peaks (empty CSV cells) and a reason.
+ * @param out - reused between calls
+ */
+export function formatRecord(r: VariantRecord, paramNames: readonly string[], out: FormattedRecord): FormattedRecord {
+  let jp = '';
+  let cp = '';
+  for (let i = 0; i < paramNames.length; i++) {
+    const v = r.params[paramNames[i]];
+    jp += `${i ? ',' : ''}${qc(paramNames[i])}:${value(v)}`;
+    cp += ',' + (typeof v === 'number' ? String(v) : csvText(String(v ?? '')));
+  }
   const stable = r.status === 'determinate' || r.status === 'indeterminate';
-  const peak = (v: string, m: string, c: string, key = 'member') => (stable && m ? `{"value":${v},"${key}":${q(m)},"combination":${q(c)}}` : 'null');
-  return `{"index":${r.index},"id":"${r.id}","params":{${params}},"status":"${r.status}","joints":${r.joints},"members":${r.members},"reactions":${r.reactions},"k":${r.k},"s":${r.s},"critical":${r.critical}` +
-    `,"peakTension":${peak(r6(r.peakTension), r.peakTensionMember, r.peakTensionCombination)}` +
-    `,"peakCompression":${peak(r6(r.peakCompression), r.peakCompressionMember, r.peakCompressionCombination)}` +
-    `,"maxDisplacement":${peak(r9(r.maxDisplacement), r.maxDisplacementNode, r.maxDisplacementCombination, 'node')}` +
-    `,"spanOverDeflection":${stable ? r3(r.spanOverDeflection) : 'null'},"reason":${r.reason ? q(r.reason) : 'null'}}\n`;
+  const head = `${r.status},${r.joints},${r.members},${r.reactions},${r.k},${r.s},${r.critical}`;
+  let json = `{"index":${r.index},"id":"${r.id}","params":{${jp}},"status":"${r.status}","joints":${r.joints},"members":${r.members},"reactions":${r.reactions},"k":${r.k},"s":${r.s},"critical":${r.critical}`;
+  let csv = `${r.index},${r.id}${cp},${head}`;
+  const peak = (key: string, v: string, m: string, c: string, who: string) => {
+    if (stable && m) {
+      json += `,"${key}":{"value":${v},"${who}":${qc(m)},"combination":${qc(c)}}`;
+      csv += `,${v},${m},${c}`;
+    } else {
+      json += `,"${key}":null`;
+      csv += ',,,';
+    }
+  };
+  peak('peakTension', r6(r.peakTension), r.peakTensionMember, r.peakTensionCombination, 'member');
+  peak('peakCompression', r6(r.peakCompression), r.peakCompressionMember, r.peakCompressionCombination, 'member');
+  peak('maxDisplacement', r9(r.maxDisplacement), r.maxDisplacementNode, r.maxDisplacementCombination, 'node');
+  const ratio = stable && Number.isFinite(r.spanOverDeflection) ? r3(r.spanOverDeflection) : 'null';
+  json += `,"spanOverDeflection":${ratio},"reason":${r.reason ? q(r.reason) : 'null'}}\n`;
+  csv += `,${ratio === 'null' ? '' : ratio},${csvText(r.reason)}\n`;
+  out.json = json;
+  out.csv = csv;
+  return out;
+}
+
+/** One CSV row (see formatRecord). */
+export function csvRow(r: VariantRecord, paramNames: readonly string[]): string {
+  return formatRecord(r, paramNames, { json: '', csv: '' }).csv;
+}
+
+/** One JSON line (see formatRecord). */
+export function jsonLine(r: VariantRecord, paramNames: readonly string[]): string {
+  return formatRecord(r, paramNames, { json: '', csv: '' }).json;
 }

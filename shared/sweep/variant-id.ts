@@ -20,6 +20,26 @@ export function canonicalNumber(x: number): string {
  * @returns 16 lowercase hex digits
  */
 export function fnv1a64(text: string): string {
+  // eslint-disable-next-line no-control-regex
+  return /[^\x00-\x7f]/.test(text) ? fnv1a64Utf8(text) : fnv1a64Ascii(text);
+}
+
+/** FNV-1a 64 of ASCII text in four 16-bit limbs (every product stays below 2^32). */
+function fnv1a64Ascii(text: string): string {
+  let h0 = 0x2325, h1 = 0x8422, h2 = 0x9ce4, h3 = 0xcbf2;
+  for (let i = 0; i < text.length; i++) {
+    h0 ^= text.charCodeAt(i);
+    // × prime 0x100000001b3: limb 0 × 0x1b3, and limb k × 0x100 lands in limb k + 2.
+    const t0 = h0 * 0x1b3;
+    const t1 = h1 * 0x1b3 + (t0 >>> 16);
+    const t2 = h2 * 0x1b3 + h0 * 0x100 + (t1 >>> 16);
+    const t3 = h3 * 0x1b3 + h1 * 0x100 + (t2 >>> 16);
+    h0 = t0 & 0xffff; h1 = t1 & 0xffff; h2 = t2 & 0xffff; h3 = t3 & 0xffff;
+  }
+  return (h3 * 65536 + h2).toString(16).padStart(8, '0') + (h1 * 65536 + h0).toString(16).padStart(8, '0');
+}
+
+function fnv1a64Utf8(text: string): string {
   // offset basis 0xcbf29ce484222325; prime 0x100000001b3 = 2^40 + 0x1b3, so
   // (hi·2^32 + lo)·prime mod 2^64 = lo·0x1b3 + (hi·0x1b3 + lo·2^8)·2^32
   let hi = 0xcbf29ce4;
@@ -72,13 +92,30 @@ export function fnv1a64(text: string): string {
  * @param names - the parameters to include (default: every key of params)
  */
 export function variantText(family: string, params: Readonly<Params>, names?: readonly string[]): string {
-  const keys = (names ? [...names] : Object.keys(params)).sort(byCodeUnit);
-  let text = JSON.stringify(family);
+  const keys = names ? sortedOnce(names) : Object.keys(params).sort(byCodeUnit);
+  let text = quoted(family);
   for (const k of keys) {
     const v = params[k];
-    text += `;${k}=${typeof v === 'number' ? canonicalNumber(v) : JSON.stringify(v)}`;
+    text += `;${k}=${typeof v === 'number' ? canonicalNumber(v) : quoted(v)}`;
   }
   return text;
+}
+
+// A sweep asks for the same few names and option strings millions of times: sort and quote once.
+const sortedCache = new WeakMap<readonly string[], readonly string[]>();
+function sortedOnce(names: readonly string[]): readonly string[] {
+  let s = sortedCache.get(names);
+  if (!s) sortedCache.set(names, (s = [...names].sort(byCodeUnit)));
+  return s;
+}
+const quoteCache = new Map<string, string>();
+function quoted(v: string): string {
+  let q = quoteCache.get(v);
+  if (q === undefined) {
+    q = JSON.stringify(v);
+    if (quoteCache.size < 4096) quoteCache.set(v, q);
+  }
+  return q;
 }
 
 /**
