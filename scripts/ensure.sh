@@ -4,8 +4,8 @@
 set -euo pipefail
 cd "$(dirname "$0")/.."
 
-# Debian packages needed by the product and its tests (none yet beyond Node itself).
-APT_PACKAGES=()
+# Debian packages needed by the product and its tests: the private database server.
+APT_PACKAGES=(mariadb-server)
 missing=()
 for p in "${APT_PACKAGES[@]}"; do
   dpkg -s "$p" >/dev/null 2>&1 || missing+=("$p")

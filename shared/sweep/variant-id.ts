@@ -20,7 +20,6 @@ export function canonicalNumber(x: number): string {
  * @returns 16 lowercase hex digits
  */
 export function fnv1a64(text: string): string {
-  // eslint-disable-next-line no-control-regex
   return /[^\x00-\x7f]/.test(text) ? fnv1a64Utf8(text) : fnv1a64Ascii(text);
 }
 
