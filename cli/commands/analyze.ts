@@ -8,7 +8,7 @@ import { writeFileAtomic } from '../io/write-atomic';
 import { analysisText } from '../report/analysis-text';
 import { ExitCode, UsageError, VERSION, type Io } from '../context';
 
-interface Options { json?: boolean; combination?: string[]; section?: string[]; failOn?: string; out?: string }
+interface Options { cases?: boolean; json?: boolean; combination?: string[]; section?: string[]; failOn?: string; out?: string }
 
 export function registerAnalyze(program: Command, io: Io): void {
   program
@@ -18,6 +18,7 @@ export function registerAnalyze(program: Command, io: Io): void {
     .option('--json', 'print the result as JSON (the contract CI jobs read)')
     .option('-c, --combination <ids>', 'report only these combinations or load cases (comma-separated; repeatable)', collect, [])
     .option('-s, --section <members>', 'method of sections: cut these members (comma-separated, up to three); repeat for more cuts', collect, [])
+    .option('--cases', 'also tabulate each load case alone (the JSON always has them under "cases")')
     .option('--fail-on <what>', "exit 1 when the frame is 'unstable' (or 'critical')")
     .option('-o, --out <file>', 'also write the JSON result to this file (written whole or not at all)')
     .addHelpText('after', '\nExamples:\n  panelpoint analyze examples/models/depot-roof-r3.json\n  panelpoint analyze bridge.json --json --section TC4,D4,BC4\n')
@@ -32,7 +33,8 @@ function runAnalyze(file: string, opts: Options, io: Io): void {
   const an = analyze(st);
   const loadingIds = an.loadings.ids;
   const wanted = (opts.combination ?? []).flatMap((c) => c.split(',')).filter(Boolean);
-  for (const id of wanted) if (!loadingIds.includes(id)) throw new UsageError(`--combination ${id}: the model has ${an.loadings.kind === 'combination' ? 'combinations' : 'load cases'} ${loadingIds.join(', ')}`);
+  const caseIds = an.caseResults.map((r) => r.id);
+  for (const id of wanted) if (!loadingIds.includes(id) && !caseIds.includes(id)) throw new UsageError(`--combination ${id}: the model has ${an.loadings.kind === 'combination' ? 'combinations' : 'load cases'} ${loadingIds.join(', ')}`);
   const cuts: { loading: string; result: SectionResult }[] = [];
   if ((opts.section ?? []).length && !an.results.length) {
     const why = an.classification.status === 'unstable' ? 'the frame is unstable, so it has no member forces to cut' : 'the model has no loads';
@@ -53,10 +55,13 @@ function runAnalyze(file: string, opts: Options, io: Io): void {
     }
   }
   const doc = analysisJson(st, an, units, cuts);
-  if (wanted.length) for (const id of Object.keys(doc.results)) if (!wanted.includes(id)) delete doc.results[id];
+  if (wanted.length) {
+    for (const id of Object.keys(doc.results)) if (!wanted.includes(id)) delete doc.results[id];
+    for (const id of Object.keys(doc.cases)) if (!wanted.includes(id)) delete doc.cases[id];
+  }
   const json = JSON.stringify({ panelpoint: VERSION, file, ...doc }, null, 2) + '\n';
   if (opts.out) writeFileAtomic(opts.out, json);
-  io.out(opts.json ? json : analysisText(doc, file, VERSION, wanted));
+  io.out(opts.json ? json : analysisText(doc, file, VERSION, wanted, opts.cases));
   const c = an.classification;
   if (opts.failOn === 'unstable' && c.status === 'unstable') throw new ExitCode(1, `${file}: unstable (k = ${c.mechanisms}); --fail-on unstable`);
   if (opts.failOn === 'critical' && c.critical) throw new ExitCode(1, `${file}: critical form; --fail-on critical`);

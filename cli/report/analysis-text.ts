@@ -14,7 +14,7 @@ function dispUnit(length: string): { unit: string; factor: number } {
 }
 
 /** Render the report. @param loadings - ids to print in full (all when empty) */
-export function analysisText(doc: AnalysisJson, file: string, version: string, loadings: string[]): string {
+export function analysisText(doc: AnalysisJson, file: string, version: string, loadings: string[], withCases = false): string {
   const c = doc.classification;
   const { force } = doc.units;
   const du = dispUnit(doc.units.length);
@@ -40,7 +40,8 @@ export function analysisText(doc: AnalysisJson, file: string, version: string, l
       out.push(table([{ head: 'mode' }, { head: 'joint' }, { head: 'ux', right: true }, { head: 'uy', right: true }], rows));
     });
   }
-  const ids = Object.keys(doc.results);
+  const all = { ...doc.results, ...(withCases ? doc.cases : {}) };
+  const ids = Object.keys(all);
   if (!ids.length) {
     out.push('', c.status === 'unstable' ? 'No forces: an unstable frame cannot carry general loads. Fix the mechanisms above first.' : 'No loads in the model.');
   } else {
@@ -49,23 +50,23 @@ export function analysisText(doc: AnalysisJson, file: string, version: string, l
     out.push(table(
       [{ head: 'loading' }, { head: 'max tension' }, { head: force, right: true }, { head: 'max compression' }, { head: force, right: true }, { head: 'max displacement' }, { head: du.unit, right: true }, { head: 'statics check' }],
       shown.map((id) => {
-        const r = doc.results[id] as ResultJson;
+        const r = all[id] as ResultJson;
         const p = r.peak;
         const check = r.checks.staticsDifference !== undefined ? `Δ ${r.checks.staticsDifference.toExponential(1)}` : `resid. ${r.checks.equilibriumResidual.toExponential(1)}`;
         return [id, p.tension?.member ?? '—', p.tension ? num(p.tension.force, 2, true) : '', p.compression?.member ?? '—', p.compression ? num(p.compression.force, 2, true) : '', p.maxDisplacement.node, num(p.maxDisplacement.value * du.factor, 2), check];
       }),
     ));
-    const first = doc.results[shown[0]] as ResultJson;
+    const first = all[shown[0]] as ResultJson;
     out.push('', `MEMBER FORCES (${force}, tension +, T/C marked)`);
     out.push(table(
       [{ head: 'member' }, ...shown.map((id) => ({ head: id, right: true }))],
-      Object.keys(first.memberForces).map((m) => [m, ...shown.map((id) => tc((doc.results[id] as ResultJson).memberForces[m]))]),
+      Object.keys(first.memberForces).map((m) => [m, ...shown.map((id) => tc((all[id] as ResultJson).memberForces[m]))]),
     ));
     out.push('', `REACTIONS (${force}, global x right, y up)`);
     out.push(table(
       [{ head: 'joint' }, ...shown.flatMap((id) => [{ head: `${id} Rx`, right: true }, { head: `${id} Ry`, right: true }])],
       Object.keys(first.reactions).map((n) => [n, ...shown.flatMap((id) => {
-        const r = (doc.results[id] as ResultJson).reactions[n];
+        const r = (all[id] as ResultJson).reactions[n];
         return [num(r.rx, 2), num(r.ry, 2)];
       })]),
     ));
@@ -73,7 +74,7 @@ export function analysisText(doc: AnalysisJson, file: string, version: string, l
     out.push(table(
       [{ head: 'joint' }, ...shown.flatMap((id) => [{ head: `${id} ux`, right: true }, { head: `${id} uy`, right: true }])],
       Object.keys(first.displacements).map((n) => [n, ...shown.flatMap((id) => {
-        const d = (doc.results[id] as ResultJson).displacements[n];
+        const d = (all[id] as ResultJson).displacements[n];
         return [num(d.ux * du.factor, 3), num(d.uy * du.factor, 3)];
       })]),
     ));

@@ -36,26 +36,37 @@ export interface Analysis {
   readonly loadings: Loadings;
   /** One per loading when the frame is stable; empty when it is unstable. */
   readonly results: LoadResult[];
+  /** When the model has combinations: one result per load case alone (factor 1) as well. */
+  readonly caseResults: LoadResult[];
 }
 
 /** Analyse a structure. */
 export function analyze(st: Structure): Analysis {
   const classification = classify(st);
   const loadings = loadVectors(st);
+  // With combinations, each load case alone is solved too, with the same factorisation.
+  const cases = loadings.kind === 'combination' ? loadVectors({ ...st, combinations: [] }) : undefined;
+  const n2 = 2 * st.nodeIds.length;
+  const all = new Float64Array(loadings.loads.length + (cases?.loads.length ?? 0));
+  all.set(loadings.loads);
+  if (cases) all.set(cases.loads, loadings.loads.length);
+  const nAll = all.length / n2;
   const nL = loadings.ids.length;
-  const kernel = createKernel(st, nL);
-  const k = kernel.run(st.x, st.y, st.EA, loadings.loads, nL);
-  const results: LoadResult[] = [];
+  const kernel = createKernel(st, nAll);
+  const k = kernel.run(st.x, st.y, st.EA, all, nAll);
+  const solved: LoadResult[] = [];
   if (classification.mechanisms === 0 && k === 0) {
     const nJ = st.nodeIds.length;
     const nM = st.from.length;
     const ns = st.supports.length;
     const eq = equilibriumMatrix(st, st.x, st.y);
-    for (let c = 0; c < nL; c++) {
+    const ids = [...loadings.ids, ...(cases?.ids ?? [])];
+    for (let c = 0; c < nAll; c++) {
+      const isCase = c >= nL;
       const forces = kernel.forces.slice(c * nM, (c + 1) * nM);
       const disp = kernel.disp.slice(c * 2 * nJ, (c + 1) * 2 * nJ);
       const react = kernel.react.slice(c * 2 * ns, (c + 1) * 2 * ns);
-      const f = loadings.loads.subarray(c * 2 * nJ, (c + 1) * 2 * nJ);
+      const f = all.subarray(c * 2 * nJ, (c + 1) * 2 * nJ);
       const t = new Float64Array(eq.cols);
       t.set(forces);
       eq.reactions.forEach((rc, q) => {
@@ -77,11 +88,11 @@ export function analyze(st: Structure): Analysis {
           for (let e = 0; e < nM; e++) staticsDifference = Math.max(staticsDifference, Math.abs(statics[e] - forces[e]));
         }
       }
-      results.push({
-        id: loadings.ids[c], kind: loadings.kind, source: loadings.sources[c], forces, disp, react,
+      solved.push({
+        id: ids[c], kind: isCase ? 'case' : loadings.kind, source: isCase ? undefined : loadings.sources[c], forces, disp, react,
         peak: findPeaks(forces, 0, nM, disp, 0, nJ), residual, staticsDifference,
       });
     }
   }
-  return { classification, pivotMechanisms: k, loadings, results };
+  return { classification, pivotMechanisms: k, loadings, results: solved.slice(0, nL), caseResults: solved.slice(nL) };
 }

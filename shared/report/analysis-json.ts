@@ -30,7 +30,8 @@ export function analysisJson(st: Structure, an: Analysis, units: OutputUnits, se
   const Lf = 1 / units.lengthFactor;
   const ids = (idx: readonly number[], names: readonly string[]) => idx.map((i) => names[i]);
   const results: Record<string, unknown> = {};
-  for (const r of an.results) {
+  const cases: Record<string, unknown> = {};
+  for (const r of [...an.results, ...an.caseResults]) {
     const fs = maxAbs(r.forces) * F;
     const us = maxAbs(r.disp) * Lf;
     const memberForces: Record<string, number> = {};
@@ -40,7 +41,7 @@ export function analysisJson(st: Structure, an: Analysis, units: OutputUnits, se
     const displacements: Record<string, { ux: number; uy: number }> = {};
     st.nodeIds.forEach((id, i) => (displacements[id] = { ux: tidy(r.disp[2 * i] * Lf, us), uy: tidy(r.disp[2 * i + 1] * Lf, us) }));
     const p = r.peak;
-    results[r.id] = {
+    (an.results.includes(r) ? results : cases)[r.id] = {
       kind: r.kind,
       ...(r.source ? { source: r.source } : {}),
       memberForces, reactions, displacements,
@@ -86,6 +87,8 @@ export function analysisJson(st: Structure, an: Analysis, units: OutputUnits, se
       findings: c.findings,
     },
     results,
+    /** Each load case alone (factor 1), when the results above are combinations. */
+    cases,
     sections: sections.map(({ loading, result }) => {
       const stiff = an.results.find((r) => r.id === loading);
       return {
