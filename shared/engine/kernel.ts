@@ -105,7 +105,21 @@ export function createKernel(topo: Topology, maxCombos: number): Kernel {
   const react = new Float64Array(maxCombos * 2 * ns);
   const countRule = nM + nReactions - 2 * nJ;
 
-  const p: Plan = { nJ, nM, ns, nFree, bw, W, from, to, slotDof, slotDir, supportOf, supports, shape, band, diag, d, invD, rhs, cosT, sinT, stiff, length, forces, disp, react };
+  // Per member: the band offset of each of its ten (p ≥ q) slot pairs, −1 where a slot is restrained,
+  // and the slot directions of its two ends, so assembly does no index arithmetic per variant.
+  const PAIRS = [[0, 0], [1, 0], [1, 1], [2, 0], [2, 1], [2, 2], [3, 0], [3, 1], [3, 2], [3, 3]];
+  const offsets = new Int32Array(10 * nM);
+  const ends = new Float64Array(8 * nM);
+  for (let e = 0; e < nM; e++) {
+    const dof = [slotDof[2 * from[e]], slotDof[2 * from[e] + 1], slotDof[2 * to[e]], slotDof[2 * to[e] + 1]];
+    PAIRS.forEach(([pp, qq], k) => {
+      const a = dof[pp], b = dof[qq];
+      offsets[10 * e + k] = a < 0 || b < 0 ? -1 : Math.max(a, b) * W + bw - Math.max(a, b) + Math.min(a, b);
+    });
+    ends.set(slotDir.subarray(4 * from[e], 4 * from[e] + 4), 8 * e);
+    ends.set(slotDir.subarray(4 * to[e], 4 * to[e] + 4), 8 * e + 4);
+  }
+  const p: Plan = { nJ, nM, ns, nFree, bw, W, from, to, slotDof, slotDir, supportOf, supports, shape, band, diag, d, invD, rhs, cosT, sinT, stiff, length, forces, disp, react, offsets, ends };
   const kernel: Kernel = {
     nJoints: nJ, nMembers: nM, nReactions, nFree, shape, k: 0, s: 0, status: STATUS_UNSTABLE,
     forces, disp, react, length,
@@ -134,10 +148,11 @@ interface Plan {
   band: Float64Array; diag: Float64Array; d: Float64Array; invD: Float64Array; rhs: Float64Array;
   cosT: Float64Array; sinT: Float64Array; stiff: Float64Array; length: Float64Array;
   forces: Float64Array; disp: Float64Array; react: Float64Array;
+  offsets: Int32Array; ends: Float64Array;
 }
 
 function assemble(p: Plan, x: Readonly<Float64Array>, y: Readonly<Float64Array>, EA: Readonly<Float64Array>): void {
-  const { nM, nFree, bw, W, from, to, slotDof, slotDir, band, diag, cosT, sinT, stiff, length } = p;
+  const { nM, nFree, bw, W, from, to, band, diag, cosT, sinT, stiff, length, offsets: off, ends } = p;
   band.fill(0);
   for (let e = 0; e < nM; e++) {
     const a = from[e];
@@ -152,26 +167,27 @@ function assemble(p: Plan, x: Readonly<Float64Array>, y: Readonly<Float64Array>,
     length[e] = L;
     const ke = EA[e] / L;
     stiff[e] = ke;
-    // Elongation = e·(u_b − u_a), projected on each free slot direction of the two joints.
-    const d0 = slotDof[2 * a], d1 = slotDof[2 * a + 1], d2 = slotDof[2 * b], d3 = slotDof[2 * b + 1];
-    const g0 = -(c * slotDir[4 * a] + s * slotDir[4 * a + 1]);
-    const g1 = -(c * slotDir[4 * a + 2] + s * slotDir[4 * a + 3]);
-    const g2 = c * slotDir[4 * b] + s * slotDir[4 * b + 1];
-    const g3 = c * slotDir[4 * b + 2] + s * slotDir[4 * b + 3];
-    addPair(band, bw, W, ke, d0, g0, d0, g0); addPair(band, bw, W, ke, d1, g1, d0, g0); addPair(band, bw, W, ke, d1, g1, d1, g1);
-    addPair(band, bw, W, ke, d2, g2, d0, g0); addPair(band, bw, W, ke, d2, g2, d1, g1); addPair(band, bw, W, ke, d2, g2, d2, g2);
-    addPair(band, bw, W, ke, d3, g3, d0, g0); addPair(band, bw, W, ke, d3, g3, d1, g1); addPair(band, bw, W, ke, d3, g3, d2, g2);
-    addPair(band, bw, W, ke, d3, g3, d3, g3);
+    // Elongation = e·(u_b − u_a), projected on each slot direction of the two ends.
+    const q = 8 * e;
+    const g0 = -(c * ends[q] + s * ends[q + 1]);
+    const g1 = -(c * ends[q + 2] + s * ends[q + 3]);
+    const g2 = c * ends[q + 4] + s * ends[q + 5];
+    const g3 = c * ends[q + 6] + s * ends[q + 7];
+    const k0 = ke * g0, k1 = ke * g1, k2 = ke * g2, k3 = ke * g3;
+    const o = 10 * e;
+    let t: number;
+    if ((t = off[o]) >= 0) band[t] += k0 * g0;
+    if ((t = off[o + 1]) >= 0) band[t] += k1 * g0;
+    if ((t = off[o + 2]) >= 0) band[t] += k1 * g1;
+    if ((t = off[o + 3]) >= 0) band[t] += k2 * g0;
+    if ((t = off[o + 4]) >= 0) band[t] += k2 * g1;
+    if ((t = off[o + 5]) >= 0) band[t] += k2 * g2;
+    if ((t = off[o + 6]) >= 0) band[t] += k3 * g0;
+    if ((t = off[o + 7]) >= 0) band[t] += k3 * g1;
+    if ((t = off[o + 8]) >= 0) band[t] += k3 * g2;
+    if ((t = off[o + 9]) >= 0) band[t] += k3 * g3;
   }
   for (let r = 0; r < nFree; r++) diag[r] = band[r * W + bw];
-}
-
-/** Add ke·gp·gq to K[dp][dq] (or K[dq][dp]: the lower triangle is stored), skipping restrained slots. */
-function addPair(band: Float64Array, bw: number, W: number, ke: number, dp: number, gp: number, dq: number, gq: number): void {
-  if (dp < 0 || dq < 0) return;
-  const v = ke * gp * gq;
-  if (dp >= dq) band[dp * W + bw - dp + dq] += v;
-  else band[dq * W + bw - dq + dp] += v;
 }
 
 function solveCombination(p: Plan, cmb: number, loads: Readonly<Float64Array>): void {
