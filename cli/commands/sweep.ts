@@ -92,7 +92,8 @@ async function runSweepCommand(file: string, opts: Options, io: Io): Promise<voi
   process.once('SIGINT', onSigint);
   const writer = new ResultWriter(out);
   const progress = startProgress(io, end - from, `sweep ${study.name}`, opts.quiet);
-  const t0 = performance.now();
+  const tStart = performance.now();
+  let t0 = tStart;
   let lastSave = t0;
   let next = from;
   try {
@@ -100,6 +101,7 @@ async function runSweepCommand(file: string, opts: Options, io: Io): Promise<voi
       task: { study: loaded.data, studyHash: loaded.hash, objective },
       start: from, end, workers, batch: positiveInt(opts.batch, '--batch', defaultBatch(end - from, workers)),
       writer, summary, progress, stopping: () => stop,
+      onReady() { t0 = performance.now(); },
       onFlush(n) {
         const now = performance.now();
         if (now - lastSave > 2000) {
@@ -114,12 +116,13 @@ async function runSweepCommand(file: string, opts: Options, io: Io): Promise<voi
     process.removeListener('SIGINT', onSigint);
   }
   const seconds = (performance.now() - t0) / 1000;
+  const startupSeconds = (t0 - tStart) / 1000;
   const interrupted = next < end;
   manifest = { ...manifest, status: interrupted ? 'interrupted' : 'complete', finishedAt: new Date().toISOString(), nextIndex: next };
-  const doc = { panelpoint: VERSION, runId: manifest.runId, study: manifest.study, shard: manifest.shard, range: manifest.range, status: manifest.status, units: manifest.units, seconds: Number(seconds.toFixed(3)), ...summary };
+  const doc = { panelpoint: VERSION, runId: manifest.runId, study: manifest.study, shard: manifest.shard, range: manifest.range, status: manifest.status, units: manifest.units, workers, seconds: Number(seconds.toFixed(3)), startupSeconds: Number(startupSeconds.toFixed(3)), ...summary };
   writeSummary(out, doc);
   writeManifest(out, manifest);
-  io.out(opts.json ? JSON.stringify(doc, null, 2) + '\n' : sweepSummaryText(summary, { study: study.name, out, seconds, interrupted, paramNames }));
+  io.out(opts.json ? JSON.stringify(doc, null, 2) + '\n' : sweepSummaryText(summary, { study: study.name, out, seconds, startupSeconds, workers, interrupted, paramNames }));
   if (interrupted) throw new ExitCode(130, `interrupted: variants up to index ${next - 1} are on disk; run again with --resume to finish`);
   if (summary.byStatus.error > 0) throw new ExitCode(3, `${summary.byStatus.error} variant(s) failed; see 'reason' in ${out}/variants.jsonl`);
 }

@@ -7,10 +7,10 @@ const FIG_UNIT: Record<string, string> = {
 };
 
 /** Render a sweep summary for the terminal. */
-export function sweepSummaryText(s: SweepSummary, meta: { study: string; out: string; seconds: number; interrupted: boolean; paramNames: string[] }): string {
+export function sweepSummaryText(s: SweepSummary, meta: { study: string; out: string; seconds: number; startupSeconds?: number; workers?: number; interrupted: boolean; paramNames: string[] }): string {
   const out: string[] = [];
   const b = s.byStatus;
-  out.push(`${meta.interrupted ? 'INTERRUPTED' : 'DONE'}  ${meta.study}: ${s.evaluated.toLocaleString('en-US')} variants in ${meta.seconds.toFixed(1)} s (${Math.round(s.evaluated / Math.max(meta.seconds, 1e-3)).toLocaleString('en-US')} variants/s)${s.filtered ? `, ${s.filtered.toLocaleString('en-US')} left out by filters` : ''}`);
+  out.push(`${meta.interrupted ? 'INTERRUPTED' : 'DONE'}  ${meta.study}: ${s.evaluated.toLocaleString('en-US')} variants in ${meta.seconds.toFixed(1)} s${meta.workers ? ` on ${meta.workers} worker(s)` : ''} (${Math.round(s.evaluated / Math.max(meta.seconds, 1e-3)).toLocaleString('en-US')} variants/s${meta.startupSeconds !== undefined ? `; start-up ${meta.startupSeconds.toFixed(1)} s` : ''})${s.filtered ? `, ${s.filtered.toLocaleString('en-US')} left out by filters` : ''}`);
   out.push(table(
     [{ head: 'status' }, { head: 'variants', right: true }, { head: 'share', right: true }],
     [

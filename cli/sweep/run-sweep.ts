@@ -22,6 +22,8 @@ export interface SweepDrive {
   onFlush(nextIndex: number): void;
   /** True once the user asked to stop. */
   stopping(): boolean;
+  /** Called once every worker has loaded the engine and the study, before the first batch. */
+  onReady?(): void;
 }
 
 /** Default worker count: every core. */
@@ -29,12 +31,14 @@ export const defaultWorkers = (): number => availableParallelism();
 
 /** Batch size: large enough to amortise messages, small enough to spread work and show progress. */
 export function defaultBatch(count: number, workers: number): number {
-  return Math.max(16, Math.min(4000, Math.ceil(count / (workers * 16))));
+  return Math.max(16, Math.min(2000, Math.ceil(count / (workers * 16))));
 }
 
 /** Run [start, end). @returns the next index not on disk (end unless stopped) */
 export async function driveSweep(d: SweepDrive): Promise<number> {
-  const pool = new Piscina<SweepTask, SweepBatch>({ filename: workerFile, minThreads: d.workers, maxThreads: d.workers, idleTimeout: 500, concurrentTasksPerWorker: 1 });
+  const pool = new Piscina<SweepTask, SweepBatch>({ filename: workerFile, minThreads: d.workers, maxThreads: d.workers, idleTimeout: 500, concurrentTasksPerWorker: 1,
+    // Bounded heaps keep a million-variant sweep well under 500 MB resident: batches are short-lived.
+    resourceLimits: { maxOldGenerationSizeMb: 96, maxYoungGenerationSizeMb: 16 } });
   const pending = new Map<number, SweepBatch>();
   const inflight = new Set<Promise<void>>();
   let next = d.start;
@@ -63,6 +67,9 @@ export async function driveSweep(d: SweepDrive): Promise<number> {
     }
   };
   try {
+    // Warm every worker (load the engine, resolve the study) before timing the batches.
+    await Promise.all(Array.from({ length: d.workers }, () => pool.run({ ...d.task, start: 0, end: 0 })));
+    d.onReady?.();
     submit();
     while (inflight.size) {
       await Promise.race(inflight);
