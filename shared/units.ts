@@ -2,13 +2,9 @@
  * Units of model and study files, read through a private mathjs instance and converted to
  * the engine's SI: m, kN, m², kN/m². Bad units are values (`{ error }`), never exceptions.
  */
-import { create, createUnitDependencies, unitDependencies, type Unit } from 'mathjs';
+import type { Unit } from 'mathjs';
 import { messages } from './errors';
-
-const math = create({ unitDependencies, createUnitDependencies });
-// Trade units mathjs lacks: ksi (kip per square inch), psf (pound-force per square foot),
-// plf and klf (pound-force and kip per linear foot).
-math.createUnit({ ksi: '1000 psi', psf: '1 lbf/ft^2', plf: '1 lbf/ft', klf: '1 kip/ft' });
+import { math } from './math';
 
 /** A converted number, or why it could not be converted. */
 export type UnitResult =

@@ -4,7 +4,10 @@
  * the conditional operator and a fixed list of functions are allowed: no assignment, no
  * property access, no matrices, no units.
  */
-import { parse, ConditionalNode, ConstantNode, FunctionNode, SymbolNode, Unit, type EvalFunction, type MathNode } from 'mathjs';
+import type { EvalFunction, MathNode, SymbolNode as SymbolNodeType } from 'mathjs';
+import { math } from '../math';
+
+const { parse, ConditionalNode, ConstantNode, FunctionNode, SymbolNode, Unit } = math;
 import { suggest } from './suggest';
 import type { Issue } from './types';
 
@@ -65,7 +68,7 @@ export function parseExpression(text: string, path: string): ParsedExpression | 
       return;
     }
     if (n.type !== 'SymbolNode') return;
-    const name = (n as SymbolNode).name;
+    const name = (n as SymbolNodeType).name;
     if (parent?.type === 'FunctionNode' && childPath === 'fn') {
       if (!EXPRESSION_FUNCTIONS.has(name)) {
         bad = { path, message: `unknown function '${name}'${suggest(name, [...EXPRESSION_FUNCTIONS])}`, position: symbolPosition(text, name) };
@@ -119,7 +122,7 @@ export function unknownSymbolIssues(
 export function compileExpression(expr: ParsedExpression, name: string, stringNames: ReadonlySet<string>): CompiledExpression {
   const isText = (n: MathNode) =>
     (n.type === 'ConstantNode' && typeof (n as MathNode & { value: unknown }).value === 'string') ||
-    (n.type === 'SymbolNode' && stringNames.has((n as SymbolNode).name));
+    (n.type === 'SymbolNode' && stringNames.has((n as SymbolNodeType).name));
   const yes = new ConstantNode(true);
   const no = new ConstantNode(false);
   const test = (n: MathNode) => new ConditionalNode(n, yes, no);
