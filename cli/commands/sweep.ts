@@ -8,7 +8,8 @@ import { csvHeader } from '../../shared/sweep/record-format';
 import { emptySummary, type Objective } from '../../shared/sweep/summary';
 import type { Study } from '../../shared/schemas/study';
 import { ExitCode, UsageError, VERSION, type Io } from '../context';
-import { loadStudyFile } from '../sweep/load-study';
+import { loadStudyFile, type LoadedStudy as LoadedStudyType } from '../sweep/load-study';
+import { passes, variantAt } from '../../shared/sweep/space';
 import { freshRunDir, readManifest, ResultWriter, scanForResume, writeManifest, writeSummary, type RunManifest } from '../sweep/run-dir';
 import { startProgress } from '../sweep/progress';
 import { defaultBatch, defaultWorkers, driveSweep } from '../sweep/run-sweep';
@@ -33,6 +34,13 @@ export function registerSweep(program: Command, io: Io): void {
     .action((file: string, opts: Options) => runSweepCommand(file, opts, io));
 }
 
+/** Does any variant of [start, end) pass the study's filters? Cheap: no truss is built. */
+function anyPasses(setup: LoadedStudyType['setup'], start: number, end: number): boolean {
+  const p = {};
+  for (let i = start; i < end; i++) if (passes(setup.plan, variantAt(setup.plan, i, p))) return true;
+  return false;
+}
+
 const positiveInt = (text: string | undefined, flag: string, fallback: number): number => {
   if (text === undefined) return fallback;
   const n = Number(text);
@@ -52,6 +60,9 @@ async function runSweepCommand(file: string, opts: Options, io: Io): Promise<voi
   if (size === 0) throw new InputError(file, [{ path: 'vary', code: 'space-empty', message: 'the parameter space is empty (0 variants)' }]);
   if (size > maxVariants) throw new InputError(file, [{ path: 'vary', code: 'space-too-large', message: `the space has ${size.toLocaleString('en-US')} variants, over --max-variants ${maxVariants.toLocaleString('en-US')}` }]);
   const { start, end } = shardRange(size, shard.index, shard.count);
+  if (setup.plan.filters.length && !anyPasses(setup, start, end)) {
+    throw new InputError(file, [{ path: 'where', code: 'space-empty', message: `every one of the ${(end - start).toLocaleString('en-US')} variants${shard.count > 1 ? ' of this shard' : ''} is left out by the filters` }]);
+  }
   const out = opts.out ?? join('out', basename(file, extname(file)));
   const objective: Objective = study.objective
     ? 'minimize' in study.objective ? { figure: study.objective.minimize, sense: 'minimize' } : { figure: study.objective.maximize, sense: 'maximize' }
@@ -63,6 +74,9 @@ async function runSweepCommand(file: string, opts: Options, io: Io): Promise<voi
   let from = start;
   if (opts.resume && readManifest(out)) {
     const old = readManifest(out)!;
+    if (old.status === 'complete' || 'mergedFrom' in old) {
+      throw new InputError(out, [{ path: 'run.json', code: 'run-complete', message: `holds a ${'mergedFrom' in old ? 'merged' : 'complete'} run; there is nothing to resume (choose another --out for a new run)` }]);
+    }
     if (old.study.hash !== loaded.hash) throw new InputError(out, [{ path: 'run.json', code: 'run-other-study', message: `holds a run of another study (or of an edited one): hash ${old.study.hash}, this study ${loaded.hash}` }]);
     if (old.shard.index !== shard.index || old.shard.count !== shard.count) throw new InputError(out, [{ path: 'run.json', code: 'run-other-shard', message: `holds shard ${old.shard.index}/${old.shard.count}, not ${shard.index}/${shard.count}` }]);
     const scan = scanForResume(out, objective);
@@ -84,10 +98,11 @@ async function runSweepCommand(file: string, opts: Options, io: Io): Promise<voi
   writeManifest(out, manifest);
 
   let stop = false;
+  const abort = () => process.exit(130);
   const onSigint = () => {
     stop = true;
     io.err('\nstopping: finishing the batches under way (Ctrl-C again to abort)\n');
-    process.once('SIGINT', () => process.exit(130));
+    process.once('SIGINT', abort);
   };
   process.once('SIGINT', onSigint);
   const writer = new ResultWriter(out);
@@ -114,6 +129,7 @@ async function runSweepCommand(file: string, opts: Options, io: Io): Promise<voi
     progress.stop();
     writer.close();
     process.removeListener('SIGINT', onSigint);
+    process.removeListener('SIGINT', abort);
   }
   const seconds = (performance.now() - t0) / 1000;
   const startupSeconds = (t0 - tStart) / 1000;

@@ -21,7 +21,7 @@ export function loadStudyFile(file: string): LoadedStudy {
     const issues: Issue[] = r.issues.map((i) => ({
       path: i.path,
       code: i.code ?? 'study-invalid',
-      message: i.position !== undefined ? `${i.message} (at character ${i.position + 1} of the expression)` : i.message,
+      message: i.position !== undefined ? `${i.message.replace(/\s*\(char \d+\)/, '')} (at character ${i.position + 1} of the expression)` : i.message,
       ...doc.locate(i.path),
     }));
     throw new InputError(file, issues);

@@ -2,6 +2,7 @@
 // Results are appended in index order, so a killed run leaves a clean prefix that --resume extends.
 import { closeSync, existsSync, ftruncateSync, mkdirSync, openSync, readFileSync, readSync, fstatSync, writeSync } from 'node:fs';
 import { join } from 'node:path';
+import { StringDecoder } from 'node:string_decoder';
 import { InputError } from '../../shared/errors';
 import { addToSummary, emptySummary, summaryInputFromJson, type Objective, type SweepSummary } from '../../shared/sweep/summary';
 import { writeFileAtomic } from '../io/write-atomic';
@@ -70,13 +71,16 @@ export function freshRunDir(dir: string, csvHeader: string): void {
 }
 
 /**
- * Prepare a folder for --resume: cut any half-written last line, make the CSV hold as many rows
- * as the JSONL, and rebuild the summary from what is on disk.
- * @returns the summary so far and the index after the last variant on disk (or -1 when none)
+ * Prepare a folder for --resume: cut any half-written last line, cut JSONL and CSV back to the
+ * rows both hold (a run killed between the two writes leaves the CSV behind), and rebuild the
+ * summary from what is on disk.
+ * @returns the summary so far, the index of the last variant kept (−1 when none), and the count
  */
 export function scanForResume(dir: string, objective: Objective): { summary: SweepSummary; lastIndex: number; lines: number } {
   const summary = emptySummary(objective);
   const jpath = join(dir, FILES.jsonl);
+  const cpath = join(dir, FILES.csv);
+  const csvRows = Math.max(0, countCompleteLines(cpath) - 1);
   const fd = openSync(jpath, 'r+');
   let lastIndex = -1;
   let lines = 0;
@@ -84,17 +88,23 @@ export function scanForResume(dir: string, objective: Objective): { summary: Swe
   try {
     const size = fstatSync(fd).size;
     const buf = Buffer.allocUnsafe(1 << 22);
+    const decoder = new StringDecoder('utf8'); // a character split across two reads stays whole
     let pos = 0;
     let carry = '';
-    while (pos < size) {
+    outer: while (pos < size) {
       const n = readSync(fd, buf, 0, buf.length, pos);
       pos += n;
-      const text = carry + buf.toString('utf8', 0, n);
+      const text = carry + decoder.write(buf.subarray(0, n));
       const parts = text.split('\n');
       carry = parts.pop()!;
       for (const line of parts) {
-        if (!line) continue;
-        const o = JSON.parse(line) as Record<string, unknown>;
+        if (lines === csvRows) break outer;
+        let o: Record<string, unknown>;
+        try {
+          o = JSON.parse(line) as Record<string, unknown>;
+        } catch {
+          throw new InputError(jpath, [{ path: `line ${lines + 1}`, code: 'run-damaged', message: 'is not valid JSON; the run cannot be resumed (start it again in a new folder)' }]);
+        }
         addToSummary(summary, summaryInputFromJson(o));
         lastIndex = o.index as number;
         lines++;
@@ -105,8 +115,22 @@ export function scanForResume(dir: string, objective: Objective): { summary: Swe
   } finally {
     closeSync(fd);
   }
-  truncateLines(join(dir, FILES.csv), lines + 1);
+  truncateLines(cpath, lines + 1);
   return { summary, lastIndex, lines };
+}
+
+function countCompleteLines(path: string): number {
+  const fd = openSync(path, 'r');
+  try {
+    const buf = Buffer.allocUnsafe(1 << 22);
+    let count = 0;
+    for (let pos = 0, n = 0; (n = readSync(fd, buf, 0, buf.length, pos)) > 0; pos += n) {
+      for (let i = 0; i < n; i++) if (buf[i] === 10) count++;
+    }
+    return count;
+  } finally {
+    closeSync(fd);
+  }
 }
 
 /** Keep the first `count` lines of a file. */

@@ -68,7 +68,7 @@ export function evaluateBatch(task: SweepTask): SweepBatch {
     formatRecord(rec, names, lines);
     jsonl.write(lines.json);
     csv.write(lines.csv);
-    addToSummary(summary, storedFigures(rec));
+    addToSummary(summary, storedFigures(rec, names));
   }
   return { start: task.start, end: task.end, jsonl: jsonl.bytes(), csv: csv.bytes(), summary };
 }

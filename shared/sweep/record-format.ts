@@ -14,10 +14,13 @@ const r9 = (v: number) => (Number.isFinite(v) ? String(roundDisp(v)) : 'null');
 const r3 = (v: number) => (Number.isFinite(v) ? String(roundRatio(v)) : 'null');
 
 /** The figures of a record as they are stored (rounded), for the summary. */
-export function storedFigures(r: VariantRecord): SummaryInput {
+export function storedFigures(r: VariantRecord, paramNames: readonly string[]): SummaryInput {
   const stable = r.status === 'determinate' || r.status === 'indeterminate';
+  // Only the family's parameters, as the JSON line holds them (a study's derived names are not stored).
+  const params: VariantRecord['params'] = {};
+  for (const n of paramNames) params[n] = r.params[n];
   return {
-    index: r.index, id: r.id, params: r.params, status: r.status, critical: r.critical, reason: r.reason,
+    index: r.index, id: r.id, params, status: r.status, critical: r.critical, reason: r.reason,
     peakTension: stable && r.peakTensionMember ? roundForce(r.peakTension) : NaN,
     peakCompression: stable && r.peakCompressionMember ? roundForce(r.peakCompression) : NaN,
     maxDisplacement: stable && r.maxDisplacementNode ? roundDisp(r.maxDisplacement) : NaN,

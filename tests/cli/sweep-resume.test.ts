@@ -5,7 +5,7 @@
  * variants in batches of 50 so the signal lands mid-run.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { appendFileSync, readFileSync } from 'node:fs';
+import { appendFileSync, readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { cli, readCsv, readLines, readRunJson, sizeOf, startCli, study, summaryWithoutTiming, tempDir, waitFor, writeStudy } from './sweep-helpers';
 
@@ -77,5 +77,33 @@ describe('resume', () => {
     const r = await cli('sweep', file, '--out', dir, '--workers', '1', '--resume', '-q');
     expect(r.code, r.err).toBe(0);
     expectSameAsReference(dir);
+  });
+
+  it('resumes a run killed between its JSONL and CSV writes (CSV behind) into the same files', async () => {
+    const dir = out('csv-behind');
+    const r0 = await cli('sweep', file, '--out', dir, '--workers', '2', '-q');
+    expect(r0.code, r0.err).toBe(0);
+    // Keep the whole JSONL but only part of the CSV, and mark the run interrupted, as a kill between the writes leaves it.
+    const csv = readFileSync(join(dir, 'variants.csv'), 'utf8').split('\n');
+    writeFileSync(join(dir, 'variants.csv'), csv.slice(0, 1 + Math.floor(KEPT / 3)).join('\n') + '\n');
+    const run = readRunJson<Record<string, unknown>>(dir, 'run.json');
+    writeFileSync(join(dir, 'run.json'), JSON.stringify({ ...run, status: 'interrupted', nextIndex: 0 }));
+    const r = await cli('sweep', file, '--out', dir, '--workers', '1', '--resume', '-q');
+    expect(r.code, r.err).toBe(0);
+    expectSameAsReference(dir);
+  });
+
+  it('refuses to resume a complete run, and a damaged line is an input error (exit 2)', async () => {
+    const done = await cli('sweep', file, '--out', out('ref'), '--resume', '-q');
+    expect(done.code).toBe(2);
+    expect(done.err).toMatch(/nothing to resume/);
+    const dir = out('damaged');
+    const k = await interrupt(dir, 'SIGKILL');
+    expect(k.signal).toBe('SIGKILL');
+    const text = readFileSync(join(dir, 'variants.jsonl'), 'utf8');
+    writeFileSync(join(dir, 'variants.jsonl'), text.replace('{"index":', '{"index";'));
+    const r = await cli('sweep', file, '--out', dir, '--resume', '-q');
+    expect(r.code, r.err).toBe(2);
+    expect(r.err).toMatch(/not valid JSON/);
   });
 });
