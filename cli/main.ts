@@ -5,6 +5,11 @@ import { InputError } from '../shared/errors';
 import { ExitCode, processIo, UsageError, VERSION, type Io } from './context';
 import { registerAnalyze } from './commands/analyze';
 import { registerSweep } from './commands/sweep';
+import { registerFamilies } from './commands/families';
+import { registerNew } from './commands/new';
+import { registerMerge } from './commands/merge';
+import { registerFreeze } from './commands/freeze';
+import { registerCheck } from './commands/check';
 
 /** Build the command table. */
 export function buildProgram(io: Io): Command {
@@ -16,6 +21,11 @@ export function buildProgram(io: Io): Command {
     .exitOverride();
   registerAnalyze(program, io);
   registerSweep(program, io);
+  registerMerge(program, io);
+  registerFamilies(program, io);
+  registerNew(program, io);
+  registerFreeze(program, io);
+  registerCheck(program, io);
   return program;
 }
 

@@ -10,6 +10,7 @@ echo "== lint (eslint, import boundaries)"; npx eslint . || status=1
 echo "== type-check (tsc; shared/ without Node types)"; npm run -s typecheck || status=1
 echo "== tests (vitest)"
 npx vitest run --reporter=default --reporter=json --outputFile=.data/vitest.json || status=1
+echo "== reference cases (panelpoint check)"; node cli/bin/panelpoint.mjs check examples/reference --junit .data/reference-junit.xml || status=1
 node -e '
   const fs = require("fs");
   let r = { numPassedTests: 0, numFailedTests: 1, numPendingTests: 0, numTodoTests: 0 };
