@@ -27,6 +27,13 @@ export default tseslint.config(
   ),
   restrict(['cli/**/*.ts'], ['**/server/**', '**/src/**'], 'cli imports shared only, never server or src.'),
   restrict(['server/**/*.ts'], ['**/cli/**', '**/src/**'], 'server imports shared only, never cli or src.'),
+  restrict(['src/**/*.ts', 'src/**/*.tsx'], ['**/cli/**', '**/server/**', 'node:*'], 'src (the web app) imports shared only, never cli or server, and no Node built-ins.'),
+  {
+    files: ['src/features/**/*.ts', 'src/features/**/*.tsx'],
+    rules: {
+      '@typescript-eslint/no-restricted-imports': ['error', { patterns: [{ group: ['@/features/*', '@/app/*', '../../*/**'], message: 'No imports between web features or from the app layer: compose features in src/app.' }] }],
+    },
+  },
   {
     files: ['shared/**/*.ts'],
     ignores: ['shared/**/*.test.ts'],

@@ -1,10 +1,31 @@
-import { defineConfig } from 'vitest/config';
+import { configDefaults, defineConfig } from 'vitest/config';
 
 export default defineConfig({
   test: {
-    include: ['shared/**/*.test.ts', 'cli/**/*.test.ts', 'server/**/*.test.ts', 'tests/**/*.test.ts'],
     environment: 'node',
     testTimeout: 30_000,
     pool: 'forks',
+    projects: [
+      {
+        extends: true,
+        test: {
+          name: 'unit',
+          include: ['shared/**/*.test.ts', 'cli/**/*.test.ts', 'server/**/*.test.ts', 'tests/**/*.test.ts'],
+          exclude: [...configDefaults.exclude, 'tests/api/**'],
+        },
+      },
+      {
+        // API tests: supertest against createApp with a throwaway MariaDB (tests/setup/mariadb.ts).
+        extends: true,
+        test: {
+          name: 'api',
+          include: ['tests/api/**/*.test.ts'],
+          globalSetup: ['tests/setup/mariadb.ts'],
+          hookTimeout: 60_000,
+        },
+      },
+      // Component tests of the web app (jsdom, React): their own config beside them.
+      'tests/web/vitest.config.ts',
+    ],
   },
 });
