@@ -86,7 +86,7 @@ async function runSweepCommand(file: string, opts: Options, io: Io): Promise<voi
     manifest = { ...old, status: 'running', nextIndex: from };
     if (!opts.quiet) io.err(`resuming ${out}: ${scan.lines.toLocaleString('en-US')} variants on disk, ${(end - from).toLocaleString('en-US')} to go\n`);
   } else {
-    freshRunDir(out, csvHeader(paramNames));
+    freshRunDir(out, csvHeader(paramNames, setup.design !== undefined));
     manifest = {
       panelpoint: VERSION, runId: randomUUID(),
       study: { name: study.name, family: study.family, hash: loaded.hash, file },

@@ -17,14 +17,17 @@ export function sweepSummaryText(s: SweepSummary, meta: { study: string; out: st
       ['determinate', b.determinate], ['indeterminate', b.indeterminate], ['unstable', b.unstable], ['failed (error)', b.error], ['critical forms (count met, unstable)', s.critical],
     ].map(([k, v]) => [String(k), (v as number).toLocaleString('en-US'), s.evaluated ? `${((100 * (v as number)) / s.evaluated).toFixed(1)} %` : '—']),
   ));
+  if (s.design) {
+    out.push('', `MEMBER DESIGN  ${s.design.sized.toLocaleString('en-US')} sized (every member passes), ${s.design.unsizable.toLocaleString('en-US')} unsizable, ${s.design.notSettled.toLocaleString('en-US')} not settled`);
+  }
   if (s.best.length) {
     const { figure, sense } = s.objective;
     const unit = FIG_UNIT[figure] ? ` (${FIG_UNIT[figure]})` : '';
     out.push('', `BEST ${s.best.length} by ${sense} ${figure}${unit}`);
     const shownParams = meta.paramNames.filter((n) => new Set(s.best.map((e) => String(e.params[n]))).size > 1);
     out.push(table(
-      [{ head: '#' }, { head: 'id' }, ...shownParams.map((n) => ({ head: n, right: true })), { head: 'status' }, { head: `${figure}${unit}`, right: true }, { head: 'tension kN', right: true }, { head: 'compr. kN', right: true }, { head: 'span/defl.', right: true }],
-      s.best.map((e) => [String(e.index), e.id, ...shownParams.map((n) => String(e.params[n])), e.status, num(e.value, figure === 'maxDisplacement' ? 4 : 1), num(e.peakTension, 1), num(e.peakCompression, 1), Number.isFinite(e.spanOverDeflection) ? num(e.spanOverDeflection, 0) : '—']),
+      [{ head: '#' }, { head: 'id' }, ...shownParams.map((n) => ({ head: n, right: true })), { head: 'status' }, { head: `${figure}${unit}`, right: true }, { head: 'tension kN', right: true }, { head: 'compr. kN', right: true }, { head: 'span/defl.', right: true }, ...(s.design ? [{ head: 'weight kN', right: true }, { head: 'max util.', right: true }] : [])],
+      s.best.map((e) => [String(e.index), e.id, ...shownParams.map((n) => String(e.params[n])), e.status, num(e.value, figure === 'maxDisplacement' ? 4 : 1), num(e.peakTension, 1), num(e.peakCompression, 1), Number.isFinite(e.spanOverDeflection) ? num(e.spanOverDeflection, 0) : '—', ...(s.design ? [num(e.weight ?? NaN, 2), num(e.maxUtilisation ?? NaN, 3)] : [])]),
     ));
   }
   if (s.reasons.length) {

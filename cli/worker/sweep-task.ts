@@ -54,6 +54,7 @@ export function evaluateBatch(task: SweepTask): SweepBatch {
   }
   const ev = cached.evaluator;
   const names = ev.setup.plan.paramNames;
+  const design = ev.setup.design !== undefined;
   const summary = emptySummary(task.objective);
   const n = task.end - task.start;
   const jsonl = new ByteSink(Math.max(4096, n * 800));
@@ -65,7 +66,7 @@ export function evaluateBatch(task: SweepTask): SweepBatch {
       summary.filtered++;
       continue;
     }
-    formatRecord(rec, names, lines);
+    formatRecord(rec, names, lines, design);
     jsonl.write(lines.json);
     csv.write(lines.csv);
     addToSummary(summary, storedFigures(rec, names));

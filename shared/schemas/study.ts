@@ -6,6 +6,7 @@
 import { Type, type Static } from '@sinclair/typebox';
 import { StudyLoad } from './study-loads';
 import { ModelCombination } from './model';
+import { DesignSpec } from './design';
 
 /** Parameter and expression names: identifiers, so that mathjs reads them as symbols. */
 const NAME_PATTERN = '^[A-Za-z_][A-Za-z0-9_]*$';
@@ -97,6 +98,8 @@ const figureLiterals = () => [
   Type.Literal('maxAbsForce', { description: 'Largest |member force| over all combinations, kN.' }),
   Type.Literal('maxDisplacement', { description: 'Largest joint displacement over all combinations, m.' }),
   Type.Literal('spanOverDeflection', { description: 'Span divided by the largest vertical displacement (dimensionless).' }),
+  Type.Literal('weight', { description: 'Total steel weight of the sized truss, kN (needs `design`; ranks only variants whose members all pass).' }),
+  Type.Literal('maxUtilisation', { description: 'Largest member utilisation of the sized truss (needs `design`).' }),
 ];
 
 /** Figures a sweep can record per variant; the unit of each is stated beside it. */
@@ -117,6 +120,13 @@ export const StudyObjective = Type.Union(
   { description: 'The figure that ranks the best variants.' },
 );
 export type StudyObjective = Static<typeof StudyObjective>;
+
+// The design spec embedded without its $id: one schema may carry an $id only once per Ajv instance.
+const { $id: _designId, title: _designTitle, ...designBody } = DesignSpec;
+const DesignSpecInStudy = Type.Unsafe<DesignSpec>({
+  ...designBody,
+  description: 'Member design: size every member group from a catalogue for every variant (code, material, catalogue, groups, lengths, limits).',
+});
 
 export const Study = Type.Object(
   {
@@ -152,6 +162,7 @@ export const Study = Type.Object(
     combinations: Type.Optional(StudyCombinations),
     record: Type.Optional(Type.Array(StudyFigure, { minItems: 1, uniqueItems: true, description: 'Figures to record per variant.' })),
     objective: Type.Optional(StudyObjective),
+    design: Type.Optional(DesignSpecInStudy),
   },
   {
     additionalProperties: false,

@@ -11,6 +11,8 @@ import type { Structure } from '../engine/structure';
 import { addCaseLoads } from '../families/loads';
 import { variantAt, passes, type SpacePlan } from './space';
 import { variantId } from './variant-id';
+import type { PreparedDesign } from '../design/prepare';
+import { emptyDesign, VariantSizer, type DesignFigures } from './evaluate-design';
 
 /** Everything a sweep needs, resolved and checked. */
 export interface SweepSetup {
@@ -22,8 +24,10 @@ export interface SweepSetup {
   readonly caseLoads: readonly (readonly StudyLoad[])[];
   /** Combinations with factors in case order. */
   readonly combinations: readonly { id: string; factors: Float64Array }[];
-  /** Section of every member: A in m², E in kN/m². */
+  /** Section of every member: A in m², E in kN/m² (the sizer's choice when `design` is set). */
   readonly section: { readonly A: number; readonly E: number };
+  /** Member design, when the study sizes members. */
+  readonly design?: PreparedDesign;
 }
 
 /** The figures of one variant; forces kN, lengths m. Reused between variants: copy what you keep. */
@@ -43,11 +47,13 @@ export interface VariantRecord {
   spanOverDeflection: number;
   /** Why a variant is unstable or failed ('' otherwise). */
   reason: string;
+  /** Member design figures (status '' when the study does not size members). */
+  design: DesignFigures;
 }
 
 interface TopoEntry {
   topo: FamilyTopology; kernel: Kernel; x: Float64Array; y: Float64Array; EA: Float64Array; area: Float64Array;
-  caseBuf: Float64Array; loads: Float64Array; reasons: Map<string, string>;
+  caseBuf: Float64Array; loads: Float64Array; reasons: Map<string, string>; sizer?: VariantSizer;
 }
 
 /** Evaluates variants of one study; one per worker thread. */
@@ -58,10 +64,23 @@ export class VariantEvaluator {
     index: 0, id: '', params: {}, status: 'error', joints: 0, members: 0, reactions: 0, k: 0, s: 0, critical: false,
     peakTension: 0, peakTensionMember: '', peakTensionCombination: '', peakCompression: 0, peakCompressionMember: '',
     peakCompressionCombination: '', maxDisplacement: 0, maxDisplacementNode: '', maxDisplacementCombination: '',
-    spanOverDeflection: NaN, reason: '',
+    spanOverDeflection: NaN, reason: '', design: emptyDesign(),
   };
 
-  constructor(readonly setup: SweepSetup) {}
+  /** Loads per case as evaluated: without `self-weight` loads when the sizer supplies self-weight. */
+  private readonly caseLoads: readonly (readonly StudyLoad[])[];
+  /** Factor of the self-weight case in each combination (sizing only). */
+  private readonly swFactor: Float64Array;
+
+  constructor(readonly setup: SweepSetup) {
+    const d = setup.design;
+    const sized = d !== undefined && d.selfWeight;
+    this.caseLoads = sized ? setup.caseLoads.map((ls) => ls.filter((l) => l.kind !== 'self-weight')) : setup.caseLoads;
+    // Self-weight goes to the case that held a self-weight load, else to D (dead), else nowhere.
+    let sw = setup.caseLoads.findIndex((ls) => ls.some((l) => l.kind === 'self-weight'));
+    if (sw < 0) sw = setup.cases.indexOf('D');
+    this.swFactor = Float64Array.from(setup.combinations, (c) => (sized && sw >= 0 ? c.factors[sw] : 0));
+  }
 
   /**
    * Evaluate variant `index`. @returns the (reused) record, or undefined when a `where` filter drops it
@@ -86,6 +105,7 @@ export class VariantEvaluator {
 
   private fail(reason: string): VariantRecord {
     const r = this.record;
+    Object.assign(r.design, emptyDesign());
     r.status = 'error';
     r.joints = r.members = r.reactions = r.k = r.s = 0;
     r.critical = false;
@@ -108,6 +128,7 @@ export class VariantEvaluator {
         EA: new Float64Array(nM).fill(E * A), area: new Float64Array(nM).fill(A),
         caseBuf: new Float64Array(this.setup.cases.length * 2 * nJ), loads: new Float64Array(nC * 2 * nJ), reasons: new Map(),
       };
+      if (this.setup.design) t.sizer = new VariantSizer(this.setup.design, topo, t.kernel, this.swFactor);
       this.topos.set(key, t);
     }
     return t;
@@ -120,7 +141,8 @@ export class VariantEvaluator {
     this.setup.family.geometry(p, topo, x, y);
     const nJ = topo.nodeIds.length;
     const n2 = 2 * nJ;
-    const { cases, caseLoads, combinations } = this.setup;
+    const { cases, combinations } = this.setup;
+    const caseLoads = this.caseLoads;
     t.caseBuf.fill(0);
     for (let c = 0; c < cases.length; c++) addCaseLoads(caseLoads[c], topo, x, y, t.area, t.caseBuf.subarray(c * n2, (c + 1) * n2));
     t.loads.fill(0);
@@ -134,7 +156,12 @@ export class VariantEvaluator {
       }
     }
     const nC = combinations.length;
-    kernel.run(x, y, t.EA, t.loads, nC);
+    if (t.sizer) {
+      t.sizer.size(x, y, t.loads, spanOf(p, t), combinations, r.design);
+    } else {
+      r.design.status = '';
+      kernel.run(x, y, t.EA, t.loads, nC);
+    }
     r.joints = nJ;
     r.members = kernel.nMembers;
     r.reactions = kernel.nReactions;
@@ -144,6 +171,7 @@ export class VariantEvaluator {
     if (kernel.status === STATUS_UNSTABLE) {
       r.status = 'unstable';
       clearPeaks(r);
+      Object.assign(r.design, emptyDesign());
       r.reason = this.reasonFor(t, p);
       return;
     }

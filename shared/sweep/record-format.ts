@@ -25,6 +25,10 @@ export function storedFigures(r: VariantRecord, paramNames: readonly string[]): 
     peakCompression: stable && r.peakCompressionMember ? roundForce(r.peakCompression) : NaN,
     maxDisplacement: stable && r.maxDisplacementNode ? roundDisp(r.maxDisplacement) : NaN,
     spanOverDeflection: stable && Number.isFinite(r.spanOverDeflection) ? roundRatio(r.spanOverDeflection) : NaN,
+    designStatus: stable ? r.design.status : '',
+    weight: stable && r.design.status && Number.isFinite(r.design.weight) ? roundRatio(r.design.weight) : NaN,
+    maxUtilisation: stable && r.design.status && Number.isFinite(r.design.maxUtilisation) ? Math.round(r.design.maxUtilisation * 1e4) / 1e4 : NaN,
+    deflectionOk: stable && r.design.status ? r.design.deflectionOk : undefined,
   };
 }
 const q = (s: string) => JSON.stringify(s);
@@ -39,9 +43,14 @@ export const FIGURE_COLUMNS = [
   'spanOverDeflection', 'reason',
 ] as const;
 
-/** The CSV header line (with newline). */
-export function csvHeader(paramNames: readonly string[]): string {
-  return ['index', 'id', ...paramNames, ...FIGURE_COLUMNS].join(',') + '\n';
+/** CSV columns of member design, after the figures, when a study sizes members. */
+export const DESIGN_COLUMNS = [
+  'design', 'weight_kN', 'mass_kg', 'maxUtilisation', 'maxUtilisationMember', 'governingCheck', 'governingCombination', 'deflectionOk', 'sections', 'designReason',
+] as const;
+
+/** The CSV header line (with newline). @param design - the study sizes members */
+export function csvHeader(paramNames: readonly string[], design = false): string {
+  return ['index', 'id', ...paramNames, ...FIGURE_COLUMNS, ...(design ? DESIGN_COLUMNS : [])].join(',') + '\n';
 }
 
 function csvText(s: string): string {
@@ -67,7 +76,7 @@ function qc(s: string): string {
  * Unstable and failed variants carry null peaks (empty CSV cells) and a reason.
  * @param out - reused between calls
  */
-export function formatRecord(r: VariantRecord, paramNames: readonly string[], out: FormattedRecord): FormattedRecord {
+export function formatRecord(r: VariantRecord, paramNames: readonly string[], out: FormattedRecord, design = false): FormattedRecord {
   let jp = '';
   let cp = '';
   for (let i = 0; i < paramNames.length; i++) {
@@ -92,8 +101,22 @@ export function formatRecord(r: VariantRecord, paramNames: readonly string[], ou
   peak('peakCompression', r6(r.peakCompression), r.peakCompressionMember, r.peakCompressionCombination, 'member');
   peak('maxDisplacement', r9(r.maxDisplacement), r.maxDisplacementNode, r.maxDisplacementCombination, 'node');
   const ratio = stable && Number.isFinite(r.spanOverDeflection) ? r3(r.spanOverDeflection) : 'null';
-  json += `,"spanOverDeflection":${ratio},"reason":${r.reason ? q(r.reason) : 'null'}}\n`;
-  csv += `,${ratio === 'null' ? '' : ratio},${csvText(r.reason)}\n`;
+  json += `,"spanOverDeflection":${ratio},"reason":${r.reason ? q(r.reason) : 'null'}`;
+  csv += `,${ratio === 'null' ? '' : ratio},${csvText(r.reason)}`;
+  if (design) {
+    const d = r.design;
+    if (d.status && d.status !== 'analysis-failed') {
+      const w = r3(d.weight), mass = r3(d.mass), u = String(Math.round(d.maxUtilisation * 1e4) / 1e4);
+      const ok = d.deflectionOk === undefined ? 'null' : String(d.deflectionOk);
+      json += `,"design":{"status":"${d.status}","weight":${w},"mass":${mass},"maxUtilisation":${u},"member":${qc(d.maxUtilisationMember)},"check":${qc(d.governingCheck)},"combination":${qc(d.governingCombination)},"deflectionOk":${ok},"sections":${q(d.sections)},"reason":${d.reason ? q(d.reason) : 'null'}}`;
+      csv += `,${d.status},${w},${mass},${u},${d.maxUtilisationMember},${csvText(d.governingCheck)},${d.governingCombination},${ok === 'null' ? '' : ok},${csvText(d.sections)},${csvText(d.reason)}`;
+    } else {
+      json += ',"design":null';
+      csv += ',,,,,,,,,,';
+    }
+  }
+  json += '}\n';
+  csv += '\n';
   out.json = json;
   out.csv = csv;
   return out;

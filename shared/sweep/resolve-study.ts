@@ -11,6 +11,7 @@ import { DEFAULT_SECTION } from '../families/to-model';
 import { planSpace } from './space';
 import { expandCombinations, type Combination } from './presets';
 import type { SweepSetup } from './evaluate';
+import { prepareDesign } from '../design/prepare';
 
 const validateStudy = compileSchema(Study);
 
@@ -36,6 +37,16 @@ export function resolveStudy(data: unknown): ResolvedStudy {
   const loads = (study.loads ?? []).map((l, i) => convertLoad(l, `loads[${i}]`, issues));
   const cases = [...new Set(loads.map((l) => l.case))];
   const combinations = expandCombinations(study.combinations, cases);
+  let design: SweepSetup['design'];
+  if (study.design !== undefined) {
+    const d = prepareDesign(study.design);
+    issues.push(...d.issues.map((i) => ({ ...i, path: i.path ? `design.${i.path}` : 'design' })));
+    design = d.design;
+  }
+  const objective = study.objective && ('minimize' in study.objective ? study.objective.minimize : study.objective.maximize);
+  if ((objective === 'weight' || objective === 'maxUtilisation') && study.design === undefined) {
+    issues.push({ path: 'objective', message: `ranking by ${objective} needs a 'design' section (code, material, catalogue)` });
+  }
   if (issues.length || 'issues' in planned) return { issues, combinations };
   if (!combinations.length) issues.push({ path: 'loads', message: 'the study has no loads, so there is nothing to combine' });
   if (issues.length) return { issues, combinations };
@@ -46,6 +57,7 @@ export function resolveStudy(data: unknown): ResolvedStudy {
     caseLoads: cases.map((c) => loads.filter((l) => l.case === c)),
     combinations: combinations.map((c) => ({ id: c.id, factors: Float64Array.from(cases, (k) => c.factors[k] ?? 0) })),
     section: DEFAULT_SECTION,
+    design,
   };
   return { setup, combinations, issues };
 }

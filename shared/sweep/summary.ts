@@ -17,10 +17,17 @@ export interface SummaryInput {
   maxDisplacement: number;
   spanOverDeflection: number;
   reason: string;
+  /** Member design: '' (not sized), sized, unsizable, not-settled. */
+  designStatus?: string;
+  /** Sized weight, kN, and largest utilisation (NaN when not sized). */
+  weight?: number;
+  maxUtilisation?: number;
+  /** The deflection check of the sized truss (undefined when the study sets no limit). */
+  deflectionOk?: boolean;
 }
 
 /** Figures an objective can rank by. */
-export type ObjectiveFigure = 'peakTension' | 'peakCompression' | 'maxAbsForce' | 'maxDisplacement' | 'spanOverDeflection';
+export type ObjectiveFigure = 'peakTension' | 'peakCompression' | 'maxAbsForce' | 'maxDisplacement' | 'spanOverDeflection' | 'weight' | 'maxUtilisation';
 
 /** The objective: a figure and a direction. */
 export interface Objective { figure: ObjectiveFigure; sense: 'minimize' | 'maximize' }
@@ -29,6 +36,7 @@ export interface Objective { figure: ObjectiveFigure; sense: 'minimize' | 'maxim
 export interface BestEntry {
   index: number; id: string; params: Params; status: string; value: number;
   peakTension: number; peakCompression: number; maxDisplacement: number; spanOverDeflection: number;
+  weight?: number; maxUtilisation?: number;
 }
 
 /** The summary as stored in summary.json. */
@@ -42,6 +50,8 @@ export interface SweepSummary {
   best: BestEntry[];
   /** Distinct reasons of unstable and failed variants, with a count and the first example. */
   reasons: { status: string; reason: string; count: number; example: { index: number; id: string; params: Params } }[];
+  /** Member design outcome counts, when the study sizes members. */
+  design?: { sized: number; unsizable: number; notSettled: number };
 }
 
 /** How many best variants a summary keeps. */
@@ -53,9 +63,17 @@ export function emptySummary(objective: Objective): SweepSummary {
   return { objective, evaluated: 0, filtered: 0, byStatus: { determinate: 0, indeterminate: 0, unstable: 0, error: 0 }, critical: 0, best: [], reasons: [] };
 }
 
+/** Every member passes and, when the study sets a limit, so does the deflection. */
+function passesDesign(v: Pick<SummaryInput, 'designStatus' | 'deflectionOk'>): boolean {
+  return v.designStatus === 'sized' && v.deflectionOk !== false;
+}
+
 /** The objective's figure of a variant (NaN when it has none). */
-export function figureOf(v: Pick<SummaryInput, 'peakTension' | 'peakCompression' | 'maxDisplacement' | 'spanOverDeflection'>, f: ObjectiveFigure): number {
+export function figureOf(v: Pick<SummaryInput, 'peakTension' | 'peakCompression' | 'maxDisplacement' | 'spanOverDeflection' | 'designStatus' | 'weight' | 'maxUtilisation' | 'deflectionOk'>, f: ObjectiveFigure): number {
   switch (f) {
+    // Weight and utilisation rank only variants whose every member passes.
+    case 'weight': return passesDesign(v) ? (v.weight ?? NaN) : NaN;
+    case 'maxUtilisation': return passesDesign(v) ? (v.maxUtilisation ?? NaN) : NaN;
     case 'peakTension': return Number.isFinite(v.peakTension) ? v.peakTension : 0;
     case 'peakCompression': return Number.isFinite(v.peakCompression) ? -v.peakCompression : 0;
     case 'maxAbsForce': {
@@ -94,12 +112,19 @@ export function addToSummary(s: SweepSummary, v: SummaryInput): void {
   const st = v.status as keyof SweepSummary['byStatus'];
   if (st in s.byStatus) s.byStatus[st]++;
   if (v.critical) s.critical++;
+  if (v.designStatus) {
+    s.design ??= { sized: 0, unsizable: 0, notSettled: 0 };
+    if (v.designStatus === 'sized') s.design.sized++;
+    else if (v.designStatus === 'unsizable') s.design.unsizable++;
+    else if (v.designStatus === 'not-settled') s.design.notSettled++;
+  }
   if (st === 'determinate' || st === 'indeterminate') {
     const value = figureOf(v, s.objective.figure);
     if (Number.isFinite(value)) {
       offerBest(s, {
         index: v.index, id: v.id, params: { ...v.params }, status: v.status, value,
         peakTension: v.peakTension, peakCompression: v.peakCompression, maxDisplacement: v.maxDisplacement, spanOverDeflection: v.spanOverDeflection,
+        ...(v.designStatus ? { weight: v.weight, maxUtilisation: v.maxUtilisation } : {}),
       });
     }
   } else {
@@ -113,6 +138,12 @@ export function mergeSummary(a: SweepSummary, b: SweepSummary): SweepSummary {
   a.filtered += b.filtered;
   for (const k of Object.keys(a.byStatus) as (keyof SweepSummary['byStatus'])[]) a.byStatus[k] += b.byStatus[k];
   a.critical += b.critical;
+  if (b.design) {
+    a.design ??= { sized: 0, unsizable: 0, notSettled: 0 };
+    a.design.sized += b.design.sized;
+    a.design.unsizable += b.design.unsizable;
+    a.design.notSettled += b.design.notSettled;
+  }
   for (const e of b.best) offerBest(a, e);
   for (const r of b.reasons) offerReason(a, r.status, r.reason, r.count, r.example);
   a.reasons.sort((p, q) => p.example.index - q.example.index);
@@ -129,5 +160,12 @@ export function summaryInputFromJson(o: Record<string, unknown>): SummaryInput {
     index: o.index as number, id: o.id as string, params: o.params as Params, status: o.status as string, critical: Boolean(o.critical),
     peakTension: val('peakTension'), peakCompression: val('peakCompression'), maxDisplacement: val('maxDisplacement'),
     spanOverDeflection: typeof o.spanOverDeflection === 'number' ? o.spanOverDeflection : NaN, reason: (o.reason as string) ?? '',
+    ...designFromJson(o.design),
   };
+}
+
+function designFromJson(d: unknown): Pick<SummaryInput, 'designStatus' | 'weight' | 'maxUtilisation' | 'deflectionOk'> {
+  if (!d || typeof d !== 'object') return {};
+  const o = d as { status?: string; weight?: number; maxUtilisation?: number; deflectionOk?: boolean | null };
+  return { designStatus: o.status ?? '', weight: o.weight ?? NaN, maxUtilisation: o.maxUtilisation ?? NaN, deflectionOk: o.deflectionOk ?? undefined };
 }
