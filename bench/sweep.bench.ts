@@ -4,11 +4,12 @@
 // Run: node --import tsx bench/sweep.bench.ts [--sample N] [--keep] [--sized]
 //   --sample N  variants for the peer (default 2000: every ⌊variants/N⌋-th index)
 //   --keep      keep the output folders (printed) instead of deleting them
-//   --sized     reserved for member sizing: passed on to `panelpoint sweep` (or PANELPOINT_BENCH_SIZED=1)
+//   --sized     also sweep the same study with member sizing on (bench/studies/sweep-bench-design.json adds the
+//               design block) with 2 workers, and print its rate against the unsized one (or PANELPOINT_BENCH_SIZED=1)
 // The last line printed is one line of JSON with the figures (see bench/README.md).
 import { spawnSync } from 'node:child_process';
 import { createHash } from 'node:crypto';
-import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { cpus, loadavg, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -39,15 +40,15 @@ spawnSync(process.execPath, [CLI, '--version'], { cwd: root, stdio: 'ignore' });
 
 interface SweepRun { workers: number; run: ChildRun; seconds: number; variants: number; perSecond: number; out: string }
 
-async function sweep(workers: number): Promise<SweepRun> {
-  const out = join(scratch, `w${workers}`);
-  const args = [CLI, 'sweep', STUDY, '--out', out, '--workers', String(workers), '-q', '--json', ...(sized ? ['--sized'] : [])];
+async function sweep(workers: number, study = STUDY, label = ''): Promise<SweepRun> {
+  const out = join(scratch, `w${workers}${label}`);
+  const args = [CLI, 'sweep', study, '--out', out, '--workers', String(workers), '-q', '--json'];
   const run = await measureChild(process.execPath, args, root, scratch);
   if (run.code !== 0) throw new Error(`panelpoint sweep --workers ${workers} exited ${run.code}:\n${run.stderr}`);
   const summary = JSON.parse(run.stdout) as { seconds: number; range: { start: number; end: number } };
   const variants = summary.range.end - summary.range.start;
   const r = { workers, run, seconds: summary.seconds, variants, perSecond: variants / summary.seconds, out };
-  log(`  ${workers} worker(s): ${variants.toLocaleString('en-US')} variants in ${r.seconds.toFixed(2)} s = ${Math.round(r.perSecond).toLocaleString('en-US')} variants/s; ` +
+  log(`  ${workers} worker(s)${label ? ` ${label}` : ''}: ${variants.toLocaleString('en-US')} variants in ${r.seconds.toFixed(2)} s = ${Math.round(r.perSecond).toLocaleString('en-US')} variants/s; ` +
     `wall ${run.wallSeconds.toFixed(2)} s spawn to exit (start-up ${(run.wallSeconds - r.seconds).toFixed(2)} s); peak RSS ${mb(run.peakRssKB)} MB (${run.rssMethod})`);
   return r;
 }
@@ -80,6 +81,17 @@ try {
   log('panelpoint sweep (child process, -q --json):');
   const w1 = await sweep(1);
   const w2 = await sweep(2);
+  // Member sizing on: the same study with a design block (AISC 360-16 LRFD, A500 Gr. C, the CHS catalogue).
+  let sizedFigures = {};
+  if (sized) {
+    const sizedStudy = join(scratch, 'sweep-bench-sized.json');
+    const base = JSON.parse(readFileSync(join(root, STUDY), 'utf8'));
+    writeFileSync(sizedStudy, JSON.stringify({ ...base, name: `${base.name} (sized)`, design: { code: 'aisc360-16-lrfd', material: 'a500-c-round', catalogue: 'chs', deflectionLimit: 240 } }));
+    const ws = await sweep(2, sizedStudy, 'sized');
+    const share = ws.perSecond / w2.perSecond;
+    log(`  sizing on, 2 workers: ${Math.round(ws.perSecond).toLocaleString('en-US')} variants/s = ${(100 * share).toFixed(0)} % of the unsized rate (target ≥ 25 %)`);
+    sizedFigures = { sizedVariantsPerSecond2: Math.round(ws.perSecond), sizedShareOfUnsized: sig(share, 3), sizedPeakRssMB: mb(ws.run.peakRssKB) };
+  }
   const speedup = w2.perSecond / w1.perSecond;
   const identical = hashOf(join(w1.out, 'variants.csv')) === hashOf(join(w2.out, 'variants.csv'))
     && hashOf(join(w1.out, 'variants.jsonl')) === hashOf(join(w2.out, 'variants.jsonl'));
@@ -129,6 +141,7 @@ try {
     maxRelDiffFullPrecision: sig(full.maxRelDiff, 3),
     agree,
     sized,
+    ...sizedFigures,
   }));
 } finally {
   if (!keep) rmSync(scratch, { recursive: true, force: true });
