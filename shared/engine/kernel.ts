@@ -119,7 +119,13 @@ export function createKernel(topo: Topology, maxCombos: number): Kernel {
     ends.set(slotDir.subarray(4 * from[e], 4 * from[e] + 4), 8 * e);
     ends.set(slotDir.subarray(4 * to[e], 4 * to[e] + 4), 8 * e + 4);
   }
-  const p: Plan = { nJ, nM, ns, nFree, bw, W, from, to, slotDof, slotDir, supportOf, supports, shape, band, diag, d, invD, rhs, cosT, sinT, stiff, length, forces, disp, react, offsets, ends };
+  const sm: number[] = [];
+  for (let e = 0; e < nM; e++) {
+    if (supportOf[from[e]] >= 0) sm.push(e, supportOf[from[e]], 1);
+    if (supportOf[to[e]] >= 0) sm.push(e, supportOf[to[e]], -1);
+  }
+  const supportMembers = Int32Array.from(sm);
+  const p: Plan = { nJ, nM, ns, nFree, bw, W, from, to, slotDof, slotDir, supportOf, supports, shape, band, diag, d, invD, rhs, cosT, sinT, stiff, length, forces, disp, react, offsets, ends, supportMembers };
   const kernel: Kernel = {
     nJoints: nJ, nMembers: nM, nReactions, nFree, shape, k: 0, s: 0, status: STATUS_UNSTABLE,
     forces, disp, react, length,
@@ -149,6 +155,8 @@ interface Plan {
   cosT: Float64Array; sinT: Float64Array; stiff: Float64Array; length: Float64Array;
   forces: Float64Array; disp: Float64Array; react: Float64Array;
   offsets: Int32Array; ends: Float64Array;
+  /** Triples (member, support index, +1 at the member's start joint / −1 at its end joint). */
+  supportMembers: Int32Array;
 }
 
 function assemble(p: Plan, x: Readonly<Float64Array>, y: Readonly<Float64Array>, EA: Readonly<Float64Array>): void {
@@ -191,7 +199,7 @@ function assemble(p: Plan, x: Readonly<Float64Array>, y: Readonly<Float64Array>,
 }
 
 function solveCombination(p: Plan, cmb: number, loads: Readonly<Float64Array>): void {
-  const { nJ, nM, ns, from, to, slotDof, slotDir, supportOf, supports, shape, band, invD, rhs, cosT, sinT, stiff, forces, disp, react } = p;
+  const { nJ, nM, ns, from, to, slotDof, slotDir, supports, shape, band, invD, rhs, cosT, sinT, stiff, forces, disp, react } = p;
   const lo = cmb * 2 * nJ;
   for (let i = 0; i < nJ; i++) {
     const fx = loads[lo + 2 * i];
@@ -225,17 +233,12 @@ function solveCombination(p: Plan, cmb: number, loads: Readonly<Float64Array>): 
     react[ro + 2 * q] = -loads[lo + 2 * i];
     react[ro + 2 * q + 1] = -loads[lo + 2 * i + 1];
   }
-  for (let e = 0; e < nM; e++) {
-    const N = forces[fo + e];
-    const qa = supportOf[from[e]];
-    const qb = supportOf[to[e]];
-    if (qa >= 0) {
-      react[ro + 2 * qa] -= N * cosT[e];
-      react[ro + 2 * qa + 1] -= N * sinT[e];
-    }
-    if (qb >= 0) {
-      react[ro + 2 * qb] += N * cosT[e];
-      react[ro + 2 * qb + 1] += N * sinT[e];
-    }
+  // Only members that touch a support contribute: pairs (member, support slot, sign) listed once per topology.
+  const sm = p.supportMembers;
+  for (let k = 0; k < sm.length; k += 3) {
+    const N = forces[fo + sm[k]] * sm[k + 2];
+    const o = ro + 2 * sm[k + 1];
+    react[o] -= N * cosT[sm[k]];
+    react[o + 1] -= N * sinT[sm[k]];
   }
 }
