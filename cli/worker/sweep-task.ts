@@ -69,7 +69,7 @@ export function evaluateBatch(task: SweepTask): SweepBatch {
     formatRecord(rec, names, lines, design);
     jsonl.write(lines.json);
     csv.write(lines.csv);
-    addToSummary(summary, storedFigures(rec, names));
+    addToSummary(summary, storedFigures(rec, names), names);
   }
   return { start: task.start, end: task.end, jsonl: jsonl.bytes(), csv: csv.bytes(), summary };
 }

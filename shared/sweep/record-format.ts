@@ -16,11 +16,9 @@ const r3 = (v: number) => (Number.isFinite(v) ? String(roundRatio(v)) : 'null');
 /** The figures of a record as they are stored (rounded), for the summary. */
 export function storedFigures(r: VariantRecord, paramNames: readonly string[]): SummaryInput {
   const stable = r.status === 'determinate' || r.status === 'indeterminate';
-  // Only the family's parameters, as the JSON line holds them (a study's derived names are not stored).
-  const params: VariantRecord['params'] = {};
-  for (const n of paramNames) params[n] = r.params[n];
+  void paramNames;
   return {
-    index: r.index, id: r.id, params, status: r.status, critical: r.critical, reason: r.reason,
+    index: r.index, id: r.id, params: r.params, status: r.status, critical: r.critical, reason: r.reason,
     peakTension: stable && r.peakTensionMember ? roundForce(r.peakTension) : NaN,
     peakCompression: stable && r.peakCompressionMember ? roundForce(r.peakCompression) : NaN,
     maxDisplacement: stable && r.maxDisplacementNode ? roundDisp(r.maxDisplacement) : NaN,
@@ -88,18 +86,12 @@ export function formatRecord(r: VariantRecord, paramNames: readonly string[], ou
   const head = `${r.status},${r.joints},${r.members},${r.reactions},${r.k},${r.s},${r.critical}`;
   let json = `{"index":${r.index},"id":"${r.id}","params":{${jp}},"status":"${r.status}","joints":${r.joints},"members":${r.members},"reactions":${r.reactions},"k":${r.k},"s":${r.s},"critical":${r.critical}`;
   let csv = `${r.index},${r.id}${cp},${head}`;
-  const peak = (key: string, v: string, m: string, c: string, who: string) => {
-    if (stable && m) {
-      json += `,"${key}":{"value":${v},"${who}":${qc(m)},"combination":${qc(c)}}`;
-      csv += `,${v},${m},${c}`;
-    } else {
-      json += `,"${key}":null`;
-      csv += ',,,';
-    }
-  };
-  peak('peakTension', r6(r.peakTension), r.peakTensionMember, r.peakTensionCombination, 'member');
-  peak('peakCompression', r6(r.peakCompression), r.peakCompressionMember, r.peakCompressionCombination, 'member');
-  peak('maxDisplacement', r9(r.maxDisplacement), r.maxDisplacementNode, r.maxDisplacementCombination, 'node');
+  json += peakJson('peakTension', stable, r6(r.peakTension), r.peakTensionMember, r.peakTensionCombination, 'member');
+  json += peakJson('peakCompression', stable, r6(r.peakCompression), r.peakCompressionMember, r.peakCompressionCombination, 'member');
+  json += peakJson('maxDisplacement', stable, r9(r.maxDisplacement), r.maxDisplacementNode, r.maxDisplacementCombination, 'node');
+  csv += peakCsv(stable, r6(r.peakTension), r.peakTensionMember, r.peakTensionCombination);
+  csv += peakCsv(stable, r6(r.peakCompression), r.peakCompressionMember, r.peakCompressionCombination);
+  csv += peakCsv(stable, r9(r.maxDisplacement), r.maxDisplacementNode, r.maxDisplacementCombination);
   const ratio = stable && Number.isFinite(r.spanOverDeflection) ? r3(r.spanOverDeflection) : 'null';
   json += `,"spanOverDeflection":${ratio},"reason":${r.reason ? q(r.reason) : 'null'}`;
   csv += `,${ratio === 'null' ? '' : ratio},${csvText(r.reason)}`;
@@ -120,6 +112,14 @@ export function formatRecord(r: VariantRecord, paramNames: readonly string[], ou
   out.json = json;
   out.csv = csv;
   return out;
+}
+
+function peakJson(key: string, stable: boolean, v: string, m: string, c: string, who: string): string {
+  return stable && m ? `,"${key}":{"value":${v},"${who}":${qc(m)},"combination":${qc(c)}}` : `,"${key}":null`;
+}
+
+function peakCsv(stable: boolean, v: string, m: string, c: string): string {
+  return stable && m ? `,${v},${m},${c}` : ',,,';
 }
 
 /** One CSV row (see formatRecord). */

@@ -106,8 +106,18 @@ function offerReason(s: SweepSummary, status: string, reason: string, count: num
   } else if (s.reasons.length < REASONS_KEPT) s.reasons.push({ status, reason, count, example });
 }
 
-/** Add one variant. The record may be reused by the caller: what is kept is copied. */
-export function addToSummary(s: SweepSummary, v: SummaryInput): void {
+/**
+ * Add one variant. The record may be reused by the caller: what is kept is copied.
+ * @param names - the parameters to keep with a kept variant (default: all of `v.params`); pass the
+ *   family's names so a summary built live equals one rebuilt from the JSON lines
+ */
+export function addToSummary(s: SweepSummary, v: SummaryInput, names?: readonly string[]): void {
+  const keep = (p: Params): Params => {
+    if (!names) return { ...p };
+    const o: Params = {};
+    for (const n of names) o[n] = p[n];
+    return o;
+  };
   s.evaluated++;
   const st = v.status as keyof SweepSummary['byStatus'];
   if (st in s.byStatus) s.byStatus[st]++;
@@ -120,15 +130,18 @@ export function addToSummary(s: SweepSummary, v: SummaryInput): void {
   }
   if (st === 'determinate' || st === 'indeterminate') {
     const value = figureOf(v, s.objective.figure);
-    if (Number.isFinite(value)) {
+    const last = s.best.length === BEST_KEPT ? s.best[BEST_KEPT - 1] : undefined;
+    // Most variants do not make the list: decide before building the entry.
+    const mayEnter = !last || (value === last.value ? v.index < last.index : s.objective.sense === 'minimize' ? value < last.value : value > last.value);
+    if (Number.isFinite(value) && mayEnter) {
       offerBest(s, {
-        index: v.index, id: v.id, params: { ...v.params }, status: v.status, value,
+        index: v.index, id: v.id, params: keep(v.params), status: v.status, value,
         peakTension: v.peakTension, peakCompression: v.peakCompression, maxDisplacement: v.maxDisplacement, spanOverDeflection: v.spanOverDeflection,
         ...(v.designStatus ? { weight: v.weight, maxUtilisation: v.maxUtilisation } : {}),
       });
     }
   } else {
-    offerReason(s, v.status, v.reason, 1, { index: v.index, id: v.id, params: { ...v.params } });
+    offerReason(s, v.status, v.reason, 1, { index: v.index, id: v.id, params: keep(v.params) });
   }
 }
 
