@@ -6,7 +6,7 @@
 import type { Topology } from './structure';
 import { reactionCount } from './structure';
 import { bandOrder } from './numbering';
-import { factorBandLdlt, solveBandLdlt, type BandShape } from './linalg/banded-ldlt';
+import { factorBandLdlt, solveBandLdltMulti, type BandShape } from './linalg/banded-ldlt';
 
 /** A pivot at or below this fraction of its diagonal counts as a mechanism (ENGINEERING.md §6). */
 export const PIVOT_TOL = 1e-10;
@@ -94,7 +94,7 @@ export function createKernel(topo: Topology, maxCombos: number): Kernel {
   const diag = new Float64Array(nFree);
   const d = new Float64Array(nFree);
   const invD = new Float64Array(nFree);
-  const rhs = new Float64Array(nFree);
+  const rhs = new Float64Array(nFree * Math.max(1, maxCombos));
   const cosT = new Float64Array(nM);
   const sinT = new Float64Array(nM);
   const stiff = new Float64Array(nM);
@@ -139,7 +139,7 @@ export function createKernel(topo: Topology, maxCombos: number): Kernel {
         return k;
       }
       kernel.status = kernel.s > 0 ? STATUS_INDETERMINATE : STATUS_DETERMINATE;
-      for (let cmb = 0; cmb < combos; cmb++) solveCombination(p, cmb, loads);
+      solveAll(p, combos, loads);
       return 0;
     },
   };
@@ -198,23 +198,33 @@ function assemble(p: Plan, x: Readonly<Float64Array>, y: Readonly<Float64Array>,
   for (let r = 0; r < nFree; r++) diag[r] = band[r * W + bw];
 }
 
-function solveCombination(p: Plan, cmb: number, loads: Readonly<Float64Array>): void {
-  const { nJ, nM, ns, from, to, slotDof, slotDir, supports, shape, band, invD, rhs, cosT, sinT, stiff, forces, disp, react } = p;
+function solveAll(p: Plan, combos: number, loads: Readonly<Float64Array>): void {
+  const { nJ, slotDof, slotDir, shape, band, invD, rhs } = p;
+  if (combos === 0) return;
+  // All right-hand sides at once, interleaved: rhs[dof · combos + c].
+  for (let c = 0; c < combos; c++) {
+    const lo = c * 2 * nJ;
+    for (let i = 0; i < nJ; i++) {
+      const fx = loads[lo + 2 * i];
+      const fy = loads[lo + 2 * i + 1];
+      const d0 = slotDof[2 * i];
+      const d1 = slotDof[2 * i + 1];
+      if (d0 >= 0) rhs[d0 * combos + c] = fx * slotDir[4 * i] + fy * slotDir[4 * i + 1];
+      if (d1 >= 0) rhs[d1 * combos + c] = fx * slotDir[4 * i + 2] + fy * slotDir[4 * i + 3];
+    }
+  }
+  solveBandLdltMulti(shape, band, invD, rhs, combos);
+  for (let c = 0; c < combos; c++) finishCombination(p, c, combos, loads);
+}
+
+function finishCombination(p: Plan, cmb: number, combos: number, loads: Readonly<Float64Array>): void {
+  const { nJ, nM, ns, from, to, slotDof, slotDir, supports, rhs, cosT, sinT, stiff, forces, disp, react } = p;
   const lo = cmb * 2 * nJ;
   for (let i = 0; i < nJ; i++) {
-    const fx = loads[lo + 2 * i];
-    const fy = loads[lo + 2 * i + 1];
     const d0 = slotDof[2 * i];
     const d1 = slotDof[2 * i + 1];
-    if (d0 >= 0) rhs[d0] = fx * slotDir[4 * i] + fy * slotDir[4 * i + 1];
-    if (d1 >= 0) rhs[d1] = fx * slotDir[4 * i + 2] + fy * slotDir[4 * i + 3];
-  }
-  solveBandLdlt(shape, band, invD, rhs, rhs);
-  for (let i = 0; i < nJ; i++) {
-    const d0 = slotDof[2 * i];
-    const d1 = slotDof[2 * i + 1];
-    const u0 = d0 >= 0 ? rhs[d0] : 0;
-    const u1 = d1 >= 0 ? rhs[d1] : 0;
+    const u0 = d0 >= 0 ? rhs[d0 * combos + cmb] : 0;
+    const u1 = d1 >= 0 ? rhs[d1 * combos + cmb] : 0;
     disp[lo + 2 * i] = u0 * slotDir[4 * i] + u1 * slotDir[4 * i + 2];
     disp[lo + 2 * i + 1] = u0 * slotDir[4 * i + 1] + u1 * slotDir[4 * i + 3];
   }

@@ -83,3 +83,34 @@ export function solveBandLdlt(shape: BandShape, band: Float64Array, invD: Float6
     for (let j = first[i]; j < i; j++) u[j] -= band[ri + j] * ui;
   }
 }
+
+/**
+ * Solve K·U = F for k right-hand sides at once, stored interleaved (u[i·k + c]), in place: each
+ * entry of L is read once for all of them. Same factor as {@link solveBandLdlt}.
+ */
+export function solveBandLdltMulti(shape: BandShape, band: Float64Array, invD: Float64Array, u: Float64Array, k: number): void {
+  const { n, bw, first } = shape;
+  const W = bw + 1;
+  for (let i = 0; i < n; i++) {
+    const ri = i * W + bw - i;
+    const oi = i * k;
+    for (let j = first[i]; j < i; j++) {
+      const l = band[ri + j];
+      const oj = j * k;
+      for (let c = 0; c < k; c++) u[oi + c] -= l * u[oj + c];
+    }
+  }
+  for (let i = 0; i < n; i++) {
+    const d = invD[i];
+    for (let c = 0; c < k; c++) u[i * k + c] *= d;
+  }
+  for (let i = n - 1; i >= 0; i--) {
+    const ri = i * W + bw - i;
+    const oi = i * k;
+    for (let j = first[i]; j < i; j++) {
+      const l = band[ri + j];
+      const oj = j * k;
+      for (let c = 0; c < k; c++) u[oj + c] -= l * u[oi + c];
+    }
+  }
+}
