@@ -59,8 +59,8 @@ export function analysisText(doc: AnalysisJson, file: string, version: string, l
     const first = all[shown[0]] as ResultJson;
     out.push('', `MEMBER FORCES (${force}, tension +, T/C marked)`);
     out.push(table(
-      [{ head: 'member' }, ...shown.map((id) => ({ head: id, right: true }))],
-      Object.keys(first.memberForces).map((m) => [m, ...shown.map((id) => tc((all[id] as ResultJson).memberForces[m]))]),
+      [{ head: 'member' }, { head: 'joints' }, { head: `length ${doc.units.length}`, right: true }, ...shown.map((id) => ({ head: id, right: true }))],
+      doc.members.map((m) => [m.id, `${m.from}–${m.to}`, num(m.length, 3), ...shown.map((id) => tc((all[id] as ResultJson).memberForces[m.id]))]),
     ));
     out.push('', `REACTIONS (${force}, global x right, y up)`);
     out.push(table(

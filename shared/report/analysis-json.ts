@@ -59,6 +59,12 @@ export function analysisJson(st: Structure, an: Analysis, units: OutputUnits, se
   return {
     model: st.name,
     units: { length: units.length, force: units.force },
+    /** Members as analysed: end joints, length (model length unit) and group. */
+    members: st.memberIds.map((id, e) => ({
+      id, from: st.nodeIds[st.from[e]], to: st.nodeIds[st.to[e]],
+      length: tidy(Math.hypot(st.x[st.to[e]] - st.x[st.from[e]], st.y[st.to[e]] - st.y[st.from[e]]) * Lf),
+      ...(st.groups?.[e] ? { group: st.groups[e] } : {}),
+    })),
     classification: {
       joints: c.joints, members: c.members, reactions: c.reactions, countRule: c.countRule, rank: c.rank,
       mechanisms: c.mechanisms, selfStress: c.selfStress, status: c.status, degree: c.degree, critical: c.critical,
