@@ -10,6 +10,8 @@ import { registerNew } from './commands/new';
 import { registerMerge } from './commands/merge';
 import { registerFreeze } from './commands/freeze';
 import { registerCheck } from './commands/check';
+import { registerLogin } from './commands/login';
+import { registerPush } from './commands/push';
 
 /** Build the command table. */
 export function buildProgram(io: Io): Command {
@@ -26,6 +28,8 @@ export function buildProgram(io: Io): Command {
   registerNew(program, io);
   registerFreeze(program, io);
   registerCheck(program, io);
+  registerLogin(program, io);
+  registerPush(program, io);
   return program;
 }
 

@@ -4,8 +4,9 @@
 set -euo pipefail
 cd "$(dirname "$0")/.."
 
-# Debian packages needed by the product and its tests: the private database server.
-APT_PACKAGES=(mariadb-server)
+# Debian packages needed by the product and its tests: the private database server, and Chromium
+# for the browser tests (driven by playwright-core; never `npx playwright install`).
+APT_PACKAGES=(mariadb-server chromium)
 missing=()
 for p in "${APT_PACKAGES[@]}"; do
   dpkg -s "$p" >/dev/null 2>&1 || missing+=("$p")

@@ -9,6 +9,7 @@ import helmet from 'helmet';
 import type { AppDeps, ResolvedDeps } from './app-deps';
 import { initModels } from './db/init-models';
 import { buildOpenApi } from './http/openapi';
+import { serveWeb } from './http/static-web';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 import { requestLog } from './middleware/request-log';
 import { API_ROUTES, type RouteModule } from './routes/api-routes';
@@ -20,6 +21,8 @@ export const API_VERSION = '0.1.0';
 export interface CreateAppOptions {
   /** Route modules to mount instead of API_ROUTES (tests of single features). */
   routes?: readonly RouteModule[];
+  /** Serve the built web app from this folder (dist/web) beside /api, with an SPA fallback. */
+  webDir?: string;
 }
 
 export function createApp(deps: AppDeps, options: CreateAppOptions = {}): Express {
@@ -41,6 +44,7 @@ export function createApp(deps: AppDeps, options: CreateAppOptions = {}): Expres
   for (const m of modules) api.use(m.router);
   api.use(apiNotFound);
   app.use('/api', api);
+  if (options.webDir) app.use(serveWeb(options.webDir));
   app.locals.openapi = buildOpenApi(modules.flatMap((m) => m.routes), { title: 'Panelpoint team server', version: API_VERSION });
 
   app.use(errorHandler(logger, deps.config.production));

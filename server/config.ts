@@ -23,6 +23,8 @@ export interface ServerConfig {
   jsonLimit: string;
   passwordResetTtlMinutes: number;
   invitationTtlDays: number;
+  /** Largest uploaded file (study, model, DXF), bytes. */
+  uploadLimitBytes: number;
 }
 
 export interface DbConfig {
@@ -48,8 +50,37 @@ export function serverConfig(overrides: Partial<ServerConfig> & { jwtSecret: str
     jsonLimit: '2mb',
     passwordResetTtlMinutes: 60,
     invitationTtlDays: 7,
+    uploadLimitBytes: 20 * 1024 * 1024,
     ...overrides,
   };
+}
+
+/**
+ * Where uploads live: an S3 bucket at `endpoint`; without an endpoint, main.ts starts a fake S3
+ * (s3rver) on loopback in development and refuses to start in production.
+ */
+export interface StorageSettings {
+  endpoint?: string;
+  bucket: string;
+  region: string;
+  /** Absent: the SDK's own credential chain (environment, instance role). */
+  accessKey?: string;
+  secretKey?: string;
+}
+
+/**
+ * Outgoing mail: an SMTP host; without a host, main.ts starts a capture sink on loopback in
+ * development (GET /api/admin/mail shows what it caught) and only logs mail in production.
+ */
+export interface MailSettings {
+  host?: string;
+  port: number;
+  /** TLS from the first byte (port 465); otherwise STARTTLS when the server offers it. */
+  secure: boolean;
+  user?: string;
+  pass?: string;
+  /** The From of every message, e.g. `Panelpoint <noreply@example.com>`. */
+  from: string;
 }
 
 export class ConfigError extends Error {
@@ -60,6 +91,10 @@ export interface LoadedConfig {
   server: ServerConfig;
   db: DbConfig;
   port: number;
+  storage: StorageSettings;
+  mail: MailSettings;
+  /** Folder for development data (fake S3 objects): DATA_DIR, default `.data`. */
+  dataDir: string;
   /** Things the operator must hear about (printed loudly by main.ts). */
   warnings: string[];
 }
@@ -72,7 +107,33 @@ function int(env: NodeJS.ProcessEnv, key: string, fallback: number): number {
   return n;
 }
 
-/** Read PORT, DB_*, JWT_SECRET, PUBLIC_URL, NODE_ENV, TRUST_PROXY, BCRYPT_ROUNDS. */
+const text = (env: NodeJS.ProcessEnv, key: string): string | undefined => (env[key] ? env[key] : undefined);
+
+/** S3_ENDPOINT, S3_BUCKET, S3_REGION, S3_ACCESS_KEY, S3_SECRET_KEY. */
+function storageSettings(env: NodeJS.ProcessEnv): StorageSettings {
+  return {
+    endpoint: text(env, 'S3_ENDPOINT'),
+    bucket: text(env, 'S3_BUCKET') ?? 'panelpoint',
+    region: text(env, 'S3_REGION') ?? 'us-east-1',
+    accessKey: text(env, 'S3_ACCESS_KEY'),
+    secretKey: text(env, 'S3_SECRET_KEY'),
+  };
+}
+
+/** SMTP_HOST, SMTP_PORT, SMTP_SECURE, SMTP_USER, SMTP_PASS, MAIL_FROM. */
+function mailSettings(env: NodeJS.ProcessEnv): MailSettings {
+  const secure = env.SMTP_SECURE === 'true' || env.SMTP_SECURE === '1';
+  return {
+    host: text(env, 'SMTP_HOST'),
+    port: int(env, 'SMTP_PORT', secure ? 465 : 587),
+    secure,
+    user: text(env, 'SMTP_USER'),
+    pass: text(env, 'SMTP_PASS'),
+    from: text(env, 'MAIL_FROM') ?? 'Panelpoint <noreply@panelpoint.invalid>',
+  };
+}
+
+/** Read PORT, DB_*, JWT_SECRET, PUBLIC_URL, NODE_ENV, TRUST_PROXY, BCRYPT_ROUNDS, UPLOAD_LIMIT_MB, S3_*, SMTP_*, MAIL_FROM, DATA_DIR. */
 export function loadConfig(env: NodeJS.ProcessEnv): LoadedConfig {
   const production = env.NODE_ENV === 'production';
   const warnings: string[] = [];
@@ -93,6 +154,7 @@ export function loadConfig(env: NodeJS.ProcessEnv): LoadedConfig {
     publicUrl: env.PUBLIC_URL || `http://127.0.0.1:${port}`,
     bcryptRounds: int(env, 'BCRYPT_ROUNDS', 10),
     trustProxy: trust === undefined || trust === '' ? false : /^\d+$/.test(trust) ? Number(trust) : trust,
+    uploadLimitBytes: int(env, 'UPLOAD_LIMIT_MB', 20) * 1024 * 1024,
   });
   const db: DbConfig = {
     host: env.DB_HOST || '127.0.0.1',
@@ -101,5 +163,5 @@ export function loadConfig(env: NodeJS.ProcessEnv): LoadedConfig {
     user: env.DB_USER || 'panelpoint',
     password: env.DB_PASSWORD ?? '',
   };
-  return { server, db, port, warnings };
+  return { server, db, port, storage: storageSettings(env), mail: mailSettings(env), dataDir: env.DATA_DIR || '.data', warnings };
 }

@@ -23,6 +23,8 @@ export const PROJECT_RIGHTS = [
   'variants:mark', // mark variants as candidates
   'variants:reject', // mark variants as rejected
   'comments:write', // comment on variants
+  'uploads:write', // upload study, model and DXF files, import DXF drawings, delete one's own uploads
+  'checks:push', // record reference-case check results (panelpoint check --push)
 ] as const;
 export type ProjectRight = (typeof PROJECT_RIGHTS)[number];
 
@@ -42,7 +44,7 @@ const GRANTS: Record<Role, readonly Right[]> = {
   admin: ALL,
   engineer: [
     'project:read', 'members:invite', 'tokens:manage', 'runs:push', 'cases:freeze',
-    'variants:mark', 'variants:reject', 'comments:write', 'projects:create',
+    'variants:mark', 'variants:reject', 'comments:write', 'projects:create', 'uploads:write', 'checks:push',
   ],
   reviewer: ['project:read', 'variants:mark', 'comments:write'],
   viewer: ['project:read'],
@@ -51,6 +53,7 @@ const GRANTS: Record<Role, readonly Right[]> = {
 /** Rights an API token may carry (a subset of its creator's rights in the project). */
 export const TOKEN_SCOPES: readonly ProjectRight[] = [
   'project:read', 'runs:push', 'cases:freeze', 'variants:mark', 'variants:reject', 'comments:write',
+  'uploads:write', 'checks:push',
 ];
 
 const PROJECT_SET = new Set<string>(PROJECT_RIGHTS);

@@ -8,6 +8,8 @@ import { SequelizeStorage, Umzug, type MigrationFn } from 'umzug';
 import * as m001 from './migrations/001-accounts';
 import * as m002 from './migrations/002-studies-runs';
 import * as m003 from './migrations/003-review-files';
+import * as m004 from './migrations/004-captured-mail';
+import * as m005 from './migrations/005-run-queries';
 
 interface MigrationModule {
   up: MigrationFn<QueryInterface>;
@@ -18,6 +20,8 @@ const MIGRATIONS: [string, MigrationModule][] = [
   ['001-accounts', m001],
   ['002-studies-runs', m002],
   ['003-review-files', m003],
+  ['004-captured-mail', m004],
+  ['005-run-queries', m005],
 ];
 
 export function createMigrator(sequelize: Sequelize): Umzug<QueryInterface> {

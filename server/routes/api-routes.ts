@@ -5,12 +5,21 @@
 import type { ResolvedDeps } from '../app-deps';
 import type { ApiRouter } from '../http/api-router';
 import { authRoutes } from './auth.route';
+import { casesRoutes } from './cases.route';
+import { checksRoutes } from './checks.route';
 import { invitationsRoutes } from './invitations.route';
+import { mailRoutes } from './mail.route';
 import { membersRoutes } from './members.route';
 import { projectsRoutes } from './projects.route';
 import { systemRoutes } from './system.route';
 import { tokensRoutes } from './tokens.route';
+import { uploadsRoutes } from './uploads.route';
 import { usersRoutes } from './users.route';
+import { studiesRoutes } from './studies.route';
+import { runsRoutes } from './runs.route';
+import { variantsRoutes } from './variants.route';
+import { marksRoutes } from './marks.route';
+import { commentsRoutes } from './comments.route';
 
 export type RouteModule = (deps: ResolvedDeps) => ApiRouter;
 
@@ -22,4 +31,13 @@ export const API_ROUTES: readonly RouteModule[] = [
   membersRoutes,
   invitationsRoutes,
   tokensRoutes,
+  uploadsRoutes,
+  casesRoutes,
+  checksRoutes,
+  mailRoutes,
+  studiesRoutes,
+  runsRoutes,
+  variantsRoutes,
+  marksRoutes,
+  commentsRoutes,
 ];

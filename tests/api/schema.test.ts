@@ -88,7 +88,7 @@ describe('schema', () => {
   it('migrates all the way down and up again', async () => {
     const migrator = createMigrator(t.sequelize);
     const names = (await migrator.executed()).map((m) => m.name);
-    expect(names).toEqual(['001-accounts', '002-studies-runs', '003-review-files']);
+    expect(names).toEqual(['001-accounts', '002-studies-runs', '003-review-files', '004-captured-mail', '005-run-queries']);
     await migrator.down({ to: 0 });
     const tables = (await t.sequelize.getQueryInterface().showAllTables()) as unknown as ({ tableName: string } | string)[];
     expect(tables.map((x) => (typeof x === 'string' ? x : x.tableName))).toEqual(['schema_migrations']);

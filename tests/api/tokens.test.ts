@@ -26,7 +26,7 @@ describe('API tokens', () => {
     expect(created.token).toMatch(/^pp_[0-9a-f]{12}_[A-Za-z0-9_-]{32,}$/);
     expect(created.token.startsWith(`pp_${created.prefix}_`)).toBe(true);
     // Default scopes: every token scope the engineer holds in the project.
-    expect(created.scopes.sort()).toEqual(['cases:freeze', 'comments:write', 'project:read', 'runs:push', 'variants:mark', 'variants:reject']);
+    expect(created.scopes.sort()).toEqual(['cases:freeze', 'checks:push', 'comments:write', 'project:read', 'runs:push', 'uploads:write', 'variants:mark', 'variants:reject']);
     const row = await ApiToken.findByPk(created.id);
     expect(row!.tokenHash).toBe(sha256Hex(created.token));
     expect(JSON.stringify(row!.toJSON())).not.toContain(created.token.slice(16));

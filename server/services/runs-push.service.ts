@@ -1,0 +1,123 @@
+/**
+ * A push: the NDJSON body read line by line as it arrives, the variants inserted with bulkCreate
+ * per line, all inside one transaction: any failure rolls everything back. Pushing a shard the
+ * run already holds changes nothing; a resumed shard adds only the variants that follow what is
+ * stored; a new shard of the same study and shard count joins the same run.
+ */
+import type { Readable } from 'node:stream';
+import { UniqueConstraintError, type Transaction } from 'sequelize';
+import { Run } from '../db/models/run.model';
+import type { User } from '../db/models/user.model';
+import type { ProjectAccess } from '../http/context';
+import { conflict, HttpError } from '../http/http-error';
+import { audit } from './audit.service';
+import { checkHeader, type PushHeader } from './runs-push-header';
+import { variantInserter } from './runs-insert';
+import { paramColumnsFor, rowsOfLine, type RowContext } from './runs-push-rows';
+import { mergedSummary, publicShards, runStatus, shardEntry, shardsOf, withShard, type PublicShard } from './runs-shards';
+import { ndjsonLines, parseLine, type NdjsonLine } from './runs-ndjson';
+import { findOrCreateStudy } from './studies.service';
+
+export interface PushAnswer {
+  runId: string;
+  created: boolean;
+  unchanged: boolean;
+  /** Variants stored by this push. */
+  inserted: number;
+  variantCount: number;
+  status: string;
+  shards: PublicShard[];
+}
+
+/** Read and store one push; `status` is the HTTP status to answer with (201 for a new run). */
+export async function pushRun(body: Readable, access: ProjectAccess, user: User): Promise<{ status: number; answer: PushAnswer }> {
+  const lines = ndjsonLines(body.iterator({ destroyOnReturn: false }));
+  try {
+    const first = await lines.next();
+    if (first.done) throw new HttpError(400, 'empty-push', 'The push is empty: send the run line, then the variants lines.');
+    const header = checkHeader(parseLine(first.value));
+    const sequelize = Run.sequelize!;
+    return await sequelize.transaction((transaction) => store(header, lines, access, user, transaction));
+  } finally {
+    // Stop reading (closing the line reader lets go of the body), but let the rest of the body
+    // drain, so that the client, still uploading, gets the answer.
+    await lines.return(undefined);
+    if (!body.readableEnded) body.resume();
+  }
+}
+
+async function findOrCreateRun(header: PushHeader, studyId: number, access: ProjectAccess, user: User, t: Transaction): Promise<{ run: Run; created: boolean }> {
+  const { manifest, cliVersion, gitCommit } = header.line;
+  const find = () => Run.findOne({ where: { runId: header.key }, transaction: t, lock: t.LOCK.UPDATE });
+  let run = await find();
+  let created = false;
+  if (!run) {
+    try {
+      run = await Run.create({
+        runId: header.key, projectId: access.project.id, studyId, pushedBy: user.id, cliVersion, gitCommit, shards: [], status: 'receiving',
+        summary: null, variantCount: 0, paramColumns: paramColumnsFor(manifest.paramNames, header.numeric),
+      }, { transaction: t });
+      created = true;
+    } catch (e) {
+      if (!(e instanceof UniqueConstraintError)) throw e;
+      run = await find(); // another push of a shard of this run committed meanwhile
+      if (!run) throw e;
+    }
+  }
+  if (run.projectId !== access.project.id) throw conflict('run-in-other-project', `Run ${header.key} was pushed to another project.`);
+  if (run.studyId !== studyId) throw conflict('run-other-study', `Run ${header.key} belongs to another study.`);
+  return { run, created };
+}
+
+async function store(header: PushHeader, lines: AsyncGenerator<NdjsonLine>, access: ProjectAccess, user: User, t: Transaction) {
+  const { manifest, summary, study } = header.line;
+  const row = await findOrCreateStudy(access.project.id, study, user, t);
+  const { run, created } = await findOrCreateRun(header, row.id, access, user, t);
+  const before = shardsOf(run.shards).find((s) => s.index === manifest.shard.index);
+  const answer = (inserted: number, unchanged: boolean): PushAnswer => ({
+    runId: run.runId, created, unchanged, inserted, variantCount: run.variantCount, status: run.status, shards: publicShards(run.shards),
+  });
+  if (before?.status === 'complete') {
+    for await (const _line of lines); // the shard is stored whole: read the rest unparsed
+    return { status: 200, answer: answer(0, true) };
+  }
+
+  const ctx: RowContext = { runPk: run.id, paramColumns: run.paramColumns, range: manifest.range, lastIndex: -1 };
+  const keepAfter = before?.lastIndex ?? -1;
+  let received = 0;
+  let inserted = 0;
+  let pending: Promise<unknown> = Promise.resolve();
+  const insert = variantInserter(t);
+  try {
+    for await (const line of lines) {
+      const { rows, records } = rowsOfLine(parseLine(line), line.n, ctx, keepAfter);
+      received += records;
+      if (!rows.length) continue;
+      await pending; // one insert in flight while the next line is read and checked
+      inserted += rows.length;
+      pending = insert(rows);
+      pending.catch(() => undefined); // handled: awaited above or below, never left to crash the process
+    }
+  } finally {
+    await pending.catch(() => undefined);
+  }
+  await pending;
+  if (received !== summary.evaluated) {
+    throw new HttpError(422, 'push-incomplete', `The push holds ${received} variants, but its summary counts ${summary.evaluated}; nothing was stored.`,
+      [{ path: 'summary.evaluated', message: `is ${summary.evaluated}; variants received: ${received}` }]);
+  }
+  const unchanged = !created && before !== undefined && inserted === 0 && before.status === manifest.status && before.variants === received;
+  if (unchanged) return { status: 200, answer: answer(0, true) };
+
+  const entry = shardEntry(manifest, summary, received, Math.max(ctx.lastIndex, keepAfter));
+  const shards = withShard(shardsOf(run.shards), entry);
+  await run.update({
+    shards, summary: mergedSummary(shards), status: runStatus(shards), variantCount: run.variantCount + inserted,
+    cliVersion: header.line.cliVersion, gitCommit: header.line.gitCommit,
+  }, { transaction: t });
+  await audit({
+    userId: user.id, projectId: access.project.id, action: 'run.push', entity: 'run', entityId: run.runId,
+    details: { shard: `${manifest.shard.index}/${manifest.shard.count}`, inserted, created },
+  }, t);
+  return { status: created ? 201 : 200, answer: answer(inserted, false) };
+}
