@@ -87,6 +87,8 @@ export const VariantRecordLine = Type.Object(
     reason: Type.Union([Type.Null(), Type.String()]),
     weight: Figure(),
     maxUtilisation: Figure(),
+    /** Member design of a sized sweep: weight kN, largest utilisation, ... (null when not sized). */
+    design: Type.Optional(Type.Union([Type.Null(), Type.Object({ weight: Type.Optional(Type.Number()), maxUtilisation: Type.Optional(Type.Number()) }, { additionalProperties: true })])),
   },
   { additionalProperties: true },
 );

@@ -80,7 +80,8 @@ function toRow(r: VariantRecordLine, ctx: RowContext): VariantRow {
     peakTension: r.peakTension?.value ?? null, peakTensionMember: r.peakTension?.member ?? null,
     peakCompression: r.peakCompression?.value ?? null, peakCompressionMember: r.peakCompression?.member ?? null,
     maxDisplacement: r.maxDisplacement?.value ?? null, spanOverDeflection: r.spanOverDeflection,
-    weight: figure(r.weight), maxUtilisation: figure(r.maxUtilisation),
+    // A sized sweep nests its design figures under `design` (shared/sweep/record-format.ts).
+    weight: figure(r.design?.weight ?? r.weight), maxUtilisation: figure(r.design?.maxUtilisation ?? r.maxUtilisation),
     reason: r.reason === null ? null : r.reason.slice(0, REASON_LENGTH),
     p1: null, p2: null, p3: null, p4: null, p5: null, p6: null,
   };

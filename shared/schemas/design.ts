@@ -29,17 +29,17 @@ export type Material = Static<typeof Material>;
 
 const Dim = (what: string) => Qty(`${what}; a number in mm or a string with a unit ("4.5 in").`);
 
-const CHS = { shape: Type.Literal('chs'), D: Dim('Outside diameter'), t: Dim('Nominal wall thickness (see wallFactor)') };
-const SHS = { shape: Type.Literal('shs'), B: Dim('Outside width'), t: Dim('Nominal wall thickness (see wallFactor)') };
+const CHS = { shape: Type.Literal('chs', { description: 'Shape kind: circular hollow section.' }), D: Dim('Outside diameter'), t: Dim('Nominal wall thickness (see wallFactor)') };
+const SHS = { shape: Type.Literal('shs', { description: 'Shape kind: square hollow section.' }), B: Dim('Outside width'), t: Dim('Nominal wall thickness (see wallFactor)') };
 const RHS = {
-  shape: Type.Literal('rhs'),
+  shape: Type.Literal('rhs', { description: 'Shape kind: rectangular hollow section.' }),
   H: Dim('Outside depth, in the truss plane'),
   B: Dim('Outside width, normal to the truss plane'),
   t: Dim('Nominal wall thickness (see wallFactor)'),
 };
-const ROD = { shape: Type.Literal('rod'), D: Dim('Diameter') };
+const ROD = { shape: Type.Literal('rod', { description: 'Shape kind: solid round bar.' }), D: Dim('Diameter') };
 const GIVEN = {
-  shape: Type.Literal('given'),
+  shape: Type.Literal('given', { description: 'Shape kind: properties given directly.' }),
   A: Qty('Cross-section area; a number in mm² or a string with a unit ("12.5 cm^2").'),
   rx: Dim('Radius of gyration for buckling in the truss plane'),
   ry: Type.Optional(Dim('Radius of gyration for buckling out of the truss plane; default rx')),
@@ -79,7 +79,7 @@ export type CatalogueSection = Static<typeof CatalogueSection>;
 export const Catalogue = Type.Object(
   {
     id: Id,
-    name: Type.Optional(Type.String()),
+    name: Type.Optional(Type.String({ description: 'Display name of the catalogue.' })),
     sections: Type.Array(CatalogueSection, { minItems: 1, description: 'Candidate sections; any order (sizing sorts by weight).' }),
   },
   { additionalProperties: false, description: 'The sections auto-sizing may choose from.' },
@@ -137,7 +137,7 @@ export const DesignSpec = Type.Object(
             }),
           ),
         },
-        { additionalProperties: false },
+        { additionalProperties: false, description: 'Unbraced lengths for buckling in and out of the truss plane.' },
       ),
     ),
     netAreaFactor: Type.Optional(
@@ -149,7 +149,7 @@ export const DesignSpec = Type.Object(
           compression: Type.Optional(Type.Number({ exclusiveMinimum: 0, description: 'Largest K·L/r of a compression member (default 200).' })),
           tension: Type.Optional(Type.Number({ exclusiveMinimum: 0, description: 'Largest L/r of a tension member (default 300).' })),
         },
-        { additionalProperties: false },
+        { additionalProperties: false, description: 'Slenderness limits (AISC 360-16 §E2 and §D1 user notes).' },
       ),
     ),
     deflectionLimit: Type.Optional(

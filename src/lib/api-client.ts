@@ -25,6 +25,7 @@ export class ApiError extends Error {
 
 export interface RequestOptions {
   query?: Record<string, string | number | boolean | undefined>;
+  /** JSON-encoded, except FormData (multipart uploads), which is sent as it is. */
   body?: unknown;
   signal?: AbortSignal;
 }
@@ -34,7 +35,10 @@ export interface ApiClient {
   get<T>(path: string, options?: Omit<RequestOptions, 'body'>): Promise<T>;
   post<T>(path: string, body?: unknown, options?: Omit<RequestOptions, 'body'>): Promise<T>;
   patch<T>(path: string, body?: unknown, options?: Omit<RequestOptions, 'body'>): Promise<T>;
+  put<T>(path: string, body?: unknown, options?: Omit<RequestOptions, 'body'>): Promise<T>;
   delete<T>(path: string, options?: Omit<RequestOptions, 'body'>): Promise<T>;
+  /** The address of a path for a plain link (downloads, CSV): base, path and query. */
+  url(path: string, query?: RequestOptions['query']): string;
 }
 
 export interface ApiClientOptions {
@@ -104,14 +108,16 @@ export function createApiClient(options: ApiClientOptions = {}): ApiClient {
 
   async function request<T>(method: string, path: string, o: RequestOptions = {}): Promise<T> {
     const headers: Record<string, string> = { Accept: 'application/json' };
-    if (o.body !== undefined) headers['Content-Type'] = 'application/json';
+    const form = typeof FormData !== 'undefined' && o.body instanceof FormData;
+    // The browser sets the multipart boundary itself.
+    if (o.body !== undefined && !form) headers['Content-Type'] = 'application/json';
     let res: Response;
     try {
       res = await doFetch(withQuery(`${base}${path}`, o.query), {
         method,
         headers,
         credentials: 'same-origin',
-        body: o.body === undefined ? undefined : JSON.stringify(o.body),
+        body: o.body === undefined ? undefined : form ? (o.body as FormData) : JSON.stringify(o.body),
         signal: o.signal,
       });
     } catch (err) {
@@ -132,7 +138,9 @@ export function createApiClient(options: ApiClientOptions = {}): ApiClient {
     get: (path, o) => request('GET', path, o),
     post: (path, body, o) => request('POST', path, { ...o, body }),
     patch: (path, body, o) => request('PATCH', path, { ...o, body }),
+    put: (path, body, o) => request('PUT', path, { ...o, body }),
     delete: (path, o) => request('DELETE', path, o),
+    url: (path, query) => withQuery(`${base}${path}`, query),
   };
 }
 

@@ -44,7 +44,7 @@ const cases: [string, string, [string, string, string][]][] = [
     [['members[2].to', '"from": "B2", "to": "B2"', 'starts and ends at node "B2"']]],
   ['a zero-length member between coincident joints',
     edit('{ "id": "T6", "x": 18, "y": 1.8 }\n', '{ "id": "T6", "x": 18, "y": 1.8 }, { "id": "X", "x": 9, "y": 0 }\n')
-      .replace('{ "id": "D6", "from": "B5", "to": "T6", "section": "web" }\n', '{ "id": "D6", "from": "B5", "to": "T6", "section": "web" },\n    { "id": "Z", "from": "B3", "to": "X" }\n'),
+      .replace('{ "id": "D6", "from": "B5", "to": "T6", "section": "web", "group": "diagonal" }\n', '{ "id": "D6", "from": "B5", "to": "T6", "section": "web", "group": "diagonal" },\n    { "id": "Z", "from": "B3", "to": "X" }\n'),
     [['nodes[14]', '"id": "X"', 'node "X" is at the same place as node "B3" (nodes[3])'], ['members[25]', '"id": "Z"', 'zero length: nodes "B3" and "X"']]],
   ['coincident joints', edit('{ "id": "T6", "x": 18, "y": 1.8 }', '{ "id": "T6", "x": 18, "y": 1.8 }, { "id": "X", "x": 9.0, "y": 1.8 }'),
     [['nodes[14]', '"id": "X"', 'node "X" is at the same place as node "T3" (nodes[10])']]],

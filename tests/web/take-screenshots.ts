@@ -1,9 +1,12 @@
-// Screenshots of the example pages in Debian's Chromium, to look at the drawing by eye.
+// Screenshots of the web pages in Debian's Chromium, to look at them by eye.
 // launch() gives Chromium a fresh temporary profile each run.
 // Usage: BASE=http://127.0.0.1:PORT npx tsx tests/web/take-screenshots.ts   (after `npx vite build && npx vite preview --port PORT`)
+// With TEAM=1 it also shoots the team-server pages: against `VITE_FAKE_API=1 npx vite --port PORT` (the invented demo),
+// or a real server with the demo accounts (PASSWORD=...). ONLY=team skips the example pages.
 import { chromium } from 'playwright-core';
 import { mkdirSync } from 'node:fs';
 import { join } from 'node:path';
+import { teamPages } from './screenshot-team-pages';
 
 const base = process.env.BASE ?? 'http://127.0.0.1:4173';
 const out = join(import.meta.dirname, '..', 'e2e', 'screenshots');
@@ -16,7 +19,8 @@ const browser = await chromium.launch({
 });
 const problems: string[] = [];
 try {
-  for (const [name, reduced] of [['depot-roof-r3', false], ['depot-roof-r3-missing-diagonal', false], ['depot-roof-r3-missing-diagonal', true]] as const) {
+  if (process.env.TEAM === '1') await teamPages(browser, base, out, problems);
+  if (process.env.ONLY !== 'team') for (const [name, reduced] of [['depot-roof-r3', false], ['depot-roof-r3-missing-diagonal', false], ['depot-roof-r3-missing-diagonal', true]] as const) {
     const page = await browser.newPage({ viewport: { width: 1440, height: 1000 }, reducedMotion: reduced ? 'reduce' : 'no-preference' });
     page.on('console', (m) => { if (m.type() === 'error' || m.type() === 'warning') problems.push(`${name}: ${m.type()}: ${m.text()}`); });
     page.on('pageerror', (e) => problems.push(`${name}: page error: ${e.message}`));
@@ -37,10 +41,6 @@ try {
     }
     await page.close();
   }
-  const page = await browser.newPage({ viewport: { width: 1280, height: 720 } });
-  await page.goto(`${base}/projects`, { waitUntil: 'networkidle' });
-  await page.screenshot({ path: join(out, 'projects-coming.png') });
-  await page.close();
 } finally {
   await browser.close();
 }

@@ -1,31 +1,37 @@
-/** The top bar: product name, project switcher (placeholder until the server lists projects), navigation, sign-in. */
+/** The top bar: product name, project picker, navigation (project sections go to the current project), account. */
+import type { ReactNode } from 'react';
 import { Link, NavLink } from 'react-router-dom';
-
-const NAV = [
-  { to: '/projects', label: 'Projects' },
-  { to: '/reference-cases', label: 'Reference cases' },
-  { to: '/uploads', label: 'Uploads' },
-  { to: '/examples', label: 'Examples' },
-  { to: '/tokens', label: 'Tokens' },
-  { to: '/admin', label: 'Admin' },
-];
+import { projectPath } from '@/lib/paths';
 
 const link = ({ isActive }: { isActive: boolean }) =>
-  `rounded px-2 py-1 text-sm ${isActive ? 'bg-white/12 text-white' : 'text-white/75 hover:text-white'}`;
+  `whitespace-nowrap rounded px-2 py-1 text-sm ${isActive ? 'bg-white/12 text-white' : 'text-white/75 hover:text-white'}`;
 
-export function TopBar() {
+interface Props {
+  /** The project the sections link to (from the address, else the last one used). */
+  project?: string;
+  projectSwitcher?: ReactNode;
+  account?: ReactNode;
+}
+
+export function TopBar({ project, projectSwitcher, account }: Props) {
+  const inProject = (section: string) => (project ? `${projectPath(project)}/${section}` : `/${section}`);
+  const nav = [
+    { to: '/projects', label: 'Projects', end: true },
+    { to: inProject('reference-cases'), label: 'Reference cases' },
+    { to: inProject('uploads'), label: 'Uploads' },
+    { to: inProject('tokens'), label: 'Tokens' },
+    { to: '/examples', label: 'Examples' },
+    { to: '/admin', label: 'Admin' },
+  ];
   return (
     <header className="bg-bar text-white">
       <div className="flex h-11 items-center gap-4 px-4">
         <Link to="/" className="num text-[15px] font-semibold tracking-tight text-white">Panelpoint</Link>
-        <button type="button" disabled aria-disabled="true" title="Projects come with the team server"
-          className="rounded border border-white/20 px-2 py-0.5 text-xs text-white/60">
-          Project: <span className="italic">none yet</span> ▾
-        </button>
+        {projectSwitcher}
         <nav aria-label="Main" className="flex min-w-0 flex-1 items-center gap-0.5 overflow-x-auto">
-          {NAV.map((n) => <NavLink key={n.to} to={n.to} className={link}>{n.label}</NavLink>)}
+          {nav.map((n) => <NavLink key={n.label} to={n.to} end={n.end} className={link}>{n.label}</NavLink>)}
         </nav>
-        <NavLink to="/sign-in" className={link}>Sign in</NavLink>
+        {account}
       </div>
     </header>
   );

@@ -1,10 +1,12 @@
 /** The sign-in form: labelled fields, the server's message on failure, back to where the user was on success. */
 import { useId, useState, type FormEvent } from 'react';
-import { useNavigate, useSearchParams } from 'react-router-dom';
+import { Link, useNavigate, useSearchParams } from 'react-router-dom';
 import { useSignIn } from '../api/sign-in';
-import { errorMessage } from '@/lib/api-client';
+import { FormError } from '@/components/form-error';
+import { BTN_PRIMARY, FIELD_WIDE, LINK } from '@/components/ui';
 
-const field = 'mt-1 block w-full rounded border border-rule-strong bg-sheet px-2 py-1.5 text-sm text-ink';
+/** Only same-site paths: a `next` of "//elsewhere" or "https://…" would leave the app. */
+export const safeNext = (next: string | null) => (next && /^\/(?!\/)/.test(next) ? next : '/projects');
 
 export function SignInForm() {
   const id = useId();
@@ -13,21 +15,23 @@ export function SignInForm() {
   const mutation = useSignIn();
   const navigate = useNavigate();
   const [params] = useSearchParams();
-  const next = params.get('next');
   const onSubmit = (e: FormEvent) => {
     e.preventDefault();
-    mutation.mutate({ email, password }, { onSuccess: () => navigate(next && next.startsWith('/') ? next : '/projects') });
+    mutation.mutate({ email, password }, { onSuccess: () => navigate(safeNext(params.get('next'))) });
   };
   return (
     <form onSubmit={onSubmit} className="max-w-sm rounded border border-rule bg-sheet p-4" aria-describedby={mutation.isError ? `${id}-err` : undefined}>
       <label htmlFor={`${id}-email`} className="block text-xs text-ink-2">Email</label>
-      <input id={`${id}-email`} type="email" autoComplete="username" required value={email} onChange={(e) => setEmail(e.target.value)} className={field} />
+      <input id={`${id}-email`} type="email" autoComplete="username" required value={email} onChange={(e) => setEmail(e.target.value)} className={FIELD_WIDE} />
       <label htmlFor={`${id}-password`} className="mt-3 block text-xs text-ink-2">Password</label>
-      <input id={`${id}-password`} type="password" autoComplete="current-password" required value={password} onChange={(e) => setPassword(e.target.value)} className={field} />
-      {mutation.isError && <p id={`${id}-err`} role="alert" className="mt-3 mb-0 text-sm text-bad">{errorMessage(mutation.error)}</p>}
-      <button type="submit" disabled={mutation.isPending} className="mt-4 rounded bg-bar px-3 py-1.5 text-sm text-white disabled:opacity-60">
-        {mutation.isPending ? 'Signing in…' : 'Sign in'}
-      </button>
+      <input id={`${id}-password`} type="password" autoComplete="current-password" required value={password} onChange={(e) => setPassword(e.target.value)} className={FIELD_WIDE} />
+      {mutation.isError && <FormError id={`${id}-err`} error={mutation.error} />}
+      <div className="mt-4 flex items-center gap-4">
+        <button type="submit" disabled={mutation.isPending} className={BTN_PRIMARY}>
+          {mutation.isPending ? 'Signing in…' : 'Sign in'}
+        </button>
+        <Link to="/reset-password" className={`text-xs ${LINK}`}>Forgot the password?</Link>
+      </div>
     </form>
   );
 }

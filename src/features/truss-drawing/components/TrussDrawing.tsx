@@ -7,8 +7,9 @@
 import { useId, useMemo, useRef, useState } from 'react';
 import type { Model } from '@shared/schemas/model';
 import type { AnalysisJson } from '@shared/report/analysis-json';
-import { buildScene, type Pt } from '../lib/scene';
-import { unitOf, viewBoxOf } from '../lib/layout';
+import { buildScene } from '../lib/scene';
+import { DEFAULT_PERCENT, MODE_AMPLITUDE, shifted, unitOf, viewBoxOf } from '../lib/layout';
+import type { DrawingScale } from '../lib/common-scale';
 import { PALETTE } from '../lib/palette';
 import { downloadBlob, fileNameOf, serializeSvg, svgToPng } from '../lib/export-image';
 import { useReducedMotion } from '../hooks/use-reduced-motion';
@@ -36,25 +37,17 @@ export interface TrussDrawingProps {
   /** Joints of a section's free body. */
   freeBody?: readonly string[];
   initialJointLabels?: boolean;
-}
-
-/** Default deflection: the largest displacement drawn as this share of the span. */
-const DEFAULT_PERCENT = 5;
-/** Mechanism amplitude: the largest mode component moves this share of the span. */
-const MODE_AMPLITUDE = 0.06;
-
-function shifted(nodes: Map<string, Pt>, by: Map<string, Pt> | undefined, f: number): Map<string, Pt> {
-  if (!by || f === 0) return nodes;
-  return new Map([...nodes].map(([id, p]) => {
-    const d = by.get(id);
-    return [id, d ? { x: p.x + f * d.x, y: p.y + f * d.y } : p];
-  }));
+  /**
+   * One scale shared with other drawings (from `commonScale`): the same view box and glyph size,
+   * so drawings of equal width show metres at the same length. Without it the drawing fits itself.
+   */
+  scale?: DrawingScale;
 }
 
 export function TrussDrawing(props: TrussDrawingProps) {
   const { model, analysis, loading } = props;
   const scene = useMemo(() => buildScene(model, analysis, loading), [model, analysis, loading]);
-  const u = unitOf(scene.extent);
+  const u = props.scale?.u ?? unitOf(scene.extent);
   const reducedMotion = useReducedMotion();
   const small = scene.members.length <= 40;
   const [labels, setLabels] = useState(props.initialJointLabels ?? small);
@@ -76,12 +69,14 @@ export function TrussDrawing(props: TrussDrawingProps) {
   const factor = scene.maxDisp > 0 ? ((percent / 100) * scene.span) / scene.maxDisp : 0;
   const deflected = scene.displacements && factor > 0 ? shifted(scene.nodes, scene.displacements, factor) : undefined;
   const reachFactor = scene.maxDisp > 0 ? ((Math.max(percent, DEFAULT_PERCENT) / 100) * scene.span) / scene.maxDisp : 0;
+  const fixedBox = props.scale?.box;
   const viewBox = useMemo(() => {
-    const shapes: Map<string, Pt>[] = [];
+    if (fixedBox) return fixedBox;
+    const shapes: ReturnType<typeof shifted>[] = [];
     if (mode) for (const f of [amp, -amp]) shapes.push(shifted(scene.nodes, mode, f));
     if (scene.displacements && reachFactor > 0) shapes.push(shifted(scene.nodes, scene.displacements, reachFactor));
     return viewBoxOf(scene, u, shapes);
-  }, [scene, u, mode, amp, reachFactor]);
+  }, [fixedBox, scene, u, mode, amp, reachFactor]);
 
   const selected = useMemo(() => new Set(props.selectedMembers ?? []), [props.selectedMembers]);
   const highlighted = useMemo(() => new Set(props.highlight?.members ?? []), [props.highlight]);
@@ -120,6 +115,7 @@ export function TrussDrawing(props: TrussDrawingProps) {
         viewBox={viewBox.map((v) => Number(v.toPrecision(8))).join(' ')}
         preserveAspectRatio="xMidYMid meet"
         data-extent={[scene.extent.x0, scene.extent.y0, scene.extent.w, scene.extent.h].join(' ')}
+        data-shared-scale={fixedBox ? 'true' : undefined}
         role="group"
         aria-labelledby={`${id}-title`}
         aria-describedby={`${id}-help`}

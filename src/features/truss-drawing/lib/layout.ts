@@ -5,6 +5,20 @@
  */
 import type { Extent, Pt, Scene } from './scene';
 
+/** Default deflection: the largest displacement drawn as this share of the span, percent. */
+export const DEFAULT_PERCENT = 5;
+/** Mechanism amplitude: the largest mode component moves this share of the span. */
+export const MODE_AMPLITUDE = 0.06;
+
+/** Joint positions moved by `f` times the displacements `by` (the nodes themselves when there is nothing to add). */
+export function shifted(nodes: Map<string, Pt>, by: Map<string, Pt> | undefined, f: number): Map<string, Pt> {
+  if (!by || f === 0) return nodes;
+  return new Map([...nodes].map(([id, p]) => {
+    const d = by.get(id);
+    return [id, d ? { x: p.x + f * d.x, y: p.y + f * d.y } : p];
+  }));
+}
+
 /** Nominal pixels across the larger side of the truss. */
 const NOMINAL_WIDTH = 760;
 

@@ -13,7 +13,7 @@ import { VerdictPanel } from './verdict-panel';
 import { FindingsList, type Highlight } from './findings-list';
 import { MemberTable } from './member-table';
 import { SectionProbe } from './section-probe';
-import { CautionLine } from './caution-line';
+import { CautionLine } from '@/components/caution-line';
 
 /** What the page hands to the drawing it renders. */
 export interface DrawingSlot {
@@ -31,6 +31,8 @@ export interface VariantDetailProps {
   renderDrawing: (slot: DrawingSlot) => ReactNode;
   /** Shown above the title: where the variant comes from. */
   context?: ReactNode;
+  /** Shown under the title: what the page adds (the server's check, marks). */
+  toolbar?: ReactNode;
 }
 
 function loadingsOf(a: AnalysisJson): { id: string; label: string }[] {
@@ -41,7 +43,7 @@ function loadingsOf(a: AnalysisJson): { id: string; label: string }[] {
   ];
 }
 
-export function VariantDetail({ model, analysis, renderDrawing, context }: VariantDetailProps) {
+export function VariantDetail({ model, analysis, renderDrawing, context, toolbar }: VariantDetailProps) {
   const loadings = useMemo(() => loadingsOf(analysis), [analysis]);
   const [loading, setLoading] = useState<string | undefined>(loadings[0]?.id);
   const [cut, setCut] = useState<string[]>([]);
@@ -68,6 +70,7 @@ export function VariantDetail({ model, analysis, renderDrawing, context }: Varia
           </label>
         )}
       </header>
+      {toolbar}
       <div className="grid grid-cols-1 gap-3 xl:grid-cols-[minmax(0,1fr)_22rem]">
         <ErrorBoundary what="the drawing">
           {renderDrawing({

@@ -1,17 +1,15 @@
-/** One variant of a run from the team server: its model and analysis JSON. */
+/** One variant of a run from the team server: its row, model, analysis JSON and the recompute check. */
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { PanelpointApi } from '@/lib/api';
+import type { PanelpointApi, RunRef } from '@/lib/api';
 import { useApi } from '@/lib/api-context';
 
-export const getVariant = (api: PanelpointApi, runId: string, variantId: string, signal?: AbortSignal) =>
-  api.getVariant(runId, variantId, signal);
+export const getVariant = (api: PanelpointApi, ref: RunRef, index: number, signal?: AbortSignal) => api.getVariant(ref, index, signal);
 
-export const variantQueryOptions = (api: PanelpointApi, runId: string, variantId: string) =>
+export const variantQueryOptions = (api: PanelpointApi, ref: RunRef, index: number) =>
   queryOptions({
-    queryKey: ['variants', 'detail', { runId, variantId }],
-    queryFn: ({ signal }) => getVariant(api, runId, variantId, signal),
+    queryKey: ['variants', 'detail', { slug: ref.slug, runId: ref.runId, index }],
+    queryFn: ({ signal }) => getVariant(api, ref, index, signal),
+    enabled: Number.isInteger(index) && index >= 0,
   });
 
-export function useVariant(runId: string, variantId: string) {
-  return useQuery(variantQueryOptions(useApi(), runId, variantId));
-}
+export const useVariant = (ref: RunRef, index: number) => useQuery(variantQueryOptions(useApi(), ref, index));
