@@ -11,7 +11,7 @@ export default defineConfig({
         test: {
           name: 'unit',
           include: ['shared/**/*.test.ts', 'cli/**/*.test.ts', 'server/**/*.test.ts', 'tests/**/*.test.ts'],
-          exclude: [...configDefaults.exclude, 'tests/api/**'],
+          exclude: [...configDefaults.exclude, 'tests/api/**', 'tests/e2e/**'],
         },
       },
       {
@@ -22,6 +22,18 @@ export default defineConfig({
           include: ['tests/api/**/*.test.ts'],
           globalSetup: ['tests/setup/mariadb.ts'],
           hookTimeout: 60_000,
+        },
+      },
+      {
+        // Browser tests: Debian's Chromium (playwright-core) against the app serving dist/web, on the
+        // throwaway MariaDB of tests/setup/mariadb.ts, as the API tests. Build dist/web first (scripts/test.sh does).
+        extends: true,
+        test: {
+          name: 'e2e',
+          include: ['tests/e2e/**/*.e2e.test.ts'],
+          globalSetup: ['tests/setup/mariadb.ts'],
+          testTimeout: 120_000,
+          hookTimeout: 300_000,
         },
       },
       // Component tests of the web app (jsdom, React): their own config beside them.
