@@ -6,6 +6,7 @@ import { ProjectSwitcher } from '@/features/projects/components/project-switcher
 import { AccountMenu } from '@/features/auth/components/account-menu';
 import { rememberedProject } from '@/lib/current-project';
 import { isPublicPath } from './public-paths';
+import { useMe } from '@/features/auth/api/get-me';
 
 export function Shell() {
   const m = useMatch('/projects/:slug/*');
@@ -14,5 +15,7 @@ export function Shell() {
   const project = slug ?? rememberedProject();
   // Public pages (sign-in, reset, examples) do not ask the server who is signed in for the picker.
   const pub = isPublicPath(pathname);
-  return <AppShell bar={<TopBar project={project} projectSwitcher={pub ? null : <ProjectSwitcher current={project} />} account={<AccountMenu />} />} />;
+  const me = useMe();
+  const user = me.data?.user;
+  return <AppShell bar={<TopBar project={project} signedIn={Boolean(user)} admin={user?.role === 'admin'} projectSwitcher={pub ? null : <ProjectSwitcher current={project} />} account={<AccountMenu />} />} />;
 }

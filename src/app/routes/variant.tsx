@@ -1,3 +1,4 @@
+import { fmtPlain } from '@/lib/format';
 /** /projects/:slug/runs/:runId/variants/:index — a variant from the team server: the server's check, marks, comments, and the full view. */
 import { useMemo } from 'react';
 import { Link, useParams } from 'react-router-dom';
@@ -20,7 +21,7 @@ export function VariantPage() {
   return (
     <QueryState q={q} what={`variant ${index} of run ${runId}`}>
       {({ variant, model, analysis, check }) => {
-        const described = Object.entries(variant.params).map(([k, v]) => `${k}=${v}`).join(', ');
+        const described = Object.entries(variant.params).map(([k, v]) => `${k}=${fmtPlain(v)}`).join(', ');
         const context = <><Crumbs slug={slug} project={project.data?.name} runId={runId} /> · variant <span className="num">{variant.index}</span> · <span className="num">{variant.variantId}</span> · <span className="num">{described}</span></>;
         const toolbar = (
           <div className="flex flex-wrap items-start gap-3">

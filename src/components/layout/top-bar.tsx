@@ -11,17 +11,23 @@ interface Props {
   project?: string;
   projectSwitcher?: ReactNode;
   account?: ReactNode;
+  /** Someone is signed in: the project sections are shown. */
+  signedIn?: boolean;
+  /** The signed-in user is an administrator: the Admin page is shown. */
+  admin?: boolean;
 }
 
-export function TopBar({ project, projectSwitcher, account }: Props) {
+export function TopBar({ project, projectSwitcher, account, signedIn = true, admin = false }: Props) {
   const inProject = (section: string) => (project ? `${projectPath(project)}/${section}` : `/${section}`);
   const nav = [
-    { to: '/projects', label: 'Projects', end: true },
-    { to: inProject('reference-cases'), label: 'Reference cases' },
-    { to: inProject('uploads'), label: 'Uploads' },
-    { to: inProject('tokens'), label: 'Tokens' },
+    ...(signedIn ? [
+      { to: '/projects', label: 'Projects', end: true },
+      { to: inProject('reference-cases'), label: 'Reference cases' },
+      { to: inProject('uploads'), label: 'Uploads' },
+      { to: inProject('tokens'), label: 'Tokens' },
+    ] : []),
     { to: '/examples', label: 'Examples' },
-    { to: '/admin', label: 'Admin' },
+    ...(admin ? [{ to: '/admin', label: 'Admin' }] : []),
   ];
   return (
     <header className="bg-bar text-white">

@@ -1,3 +1,4 @@
+import { fmtPlain } from '@/lib/format';
 /**
  * Two to four variants side by side: their drawings in equal columns at one scale (the route
  * renders them with a shared scale), then the table of differences.
@@ -31,7 +32,7 @@ export function CompareView({ items, paramNames, variantHref, renderDrawing, sca
             <div className="flex flex-wrap items-center gap-2 text-xs">
               <Link to={variantHref(it.variant.index)} className={`num font-medium ${LINK}`}>variant {it.variant.index}</Link>
               <StatusPill status={it.variant.status} critical={it.variant.critical} />
-              <span className="num text-ink-3">{Object.entries(it.variant.params).map(([k, v]) => `${k}=${v}`).join(' ')}</span>
+              <span className="num text-ink-3">{Object.entries(it.variant.params).map(([k, v]) => `${k}=${fmtPlain(v)}`).join(' ')}</span>
             </div>
             <ErrorBoundary what={`the drawing of variant ${it.variant.index}`}>{renderDrawing(it)}</ErrorBoundary>
           </div>

@@ -34,7 +34,9 @@ export function chartStateOf(params: URLSearchParams, run: RunDetail): ChartStat
   const numericParams = fields.filter((f) => f.kind === 'param' && f.numeric).map((f) => f.key);
   const firstParam = numericParams.includes('depth') ? 'depth' : (numericParams[0] ?? 'index');
   const objective = objectiveField(run);
-  const secondParam = numericParams.find((p) => p !== firstParam) ?? firstParam;
+  // The second axis of the heatmap: a parameter studies usually vary (span is mostly held fixed).
+  const preferred = ['panels', 'rise', 'slope', 'ratio'].find((p) => p !== firstParam && numericParams.includes(p));
+  const secondParam = preferred ?? numericParams.find((p) => p !== firstParam && p !== 'span') ?? numericParams.find((p) => p !== firstParam) ?? firstParam;
   const split = params.get('split');
   return {
     x: pick(fields, params.get('x'), firstParam),

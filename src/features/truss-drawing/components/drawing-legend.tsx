@@ -20,7 +20,7 @@ export function DrawingLegend({ scene, deflected, animated, cut }: { scene: Scen
   if (deflected) items.push(['Deflected shape (scaled)', line(PALETTE.deflected, 1.2)]);
   if (animated) items.push(['Rest position', line(PALETTE.ghost, 1, '3 2')]);
   if (scene.unbracedPanels.length) items.push(['Unbraced panel', <rect x={2} y={1} width={26} height={10} fill={PALETTE.unbraced} fillOpacity={0.15} stroke={PALETTE.unbraced} strokeDasharray="3 2" />]);
-  if (scene.overBraced.size) items.push(['Over-braced member', line(PALETTE.overBraced, 8, undefined, 0.35)]);
+  if (scene.overBraced.size) items.push(['Redundant member (carries self-stress)', line(PALETTE.overBraced, 8, undefined, 0.35)]);
   if (scene.loads.length) items.push([`Load (${scene.units.force})`, <><line x1={2} y1={6} x2={22} y2={6} stroke={PALETTE.load} strokeWidth={1.3} /><path d="M29 6L22 3L22 9Z" fill={PALETTE.load} /></>]);
   if (cut) items.push(['Cut member', <path d="M13 1L13 11M17 1L17 11" stroke={PALETTE.ink} strokeWidth={1.6} />]);
   return (

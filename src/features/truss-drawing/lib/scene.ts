@@ -102,7 +102,8 @@ export function buildScene(model: Model, analysis?: AnalysisJson, loading?: stri
     modes: (c?.mechanismModes ?? []).map((m) => toMap(m.displacements)),
     unbracedPanels: findings.filter((f) => f.code === 'panel-unbraced' && f.joints).map((f) => f.joints!),
     doubleBracedPanels: doubleBraced.filter((f) => f.joints).map((f) => f.joints!),
-    overBraced: new Set([...(c?.rigidity.overBracedMembers ?? []), ...doubleBraced.flatMap((f) => f.members ?? [])]),
+    // The members the self-stress states load (the redundant set), not the whole generic circuit.
+    overBraced: new Set([...(c?.redundantMembers ?? c?.rigidity.overBracedMembers ?? []), ...doubleBraced.flatMap((f) => f.members ?? [])]),
     status: c?.status,
   };
 }
