@@ -7,6 +7,8 @@
 #   4. server/main.ts: migrations; the fake S3 (s3rver, data in .data/s3) and the SMTP sink, both on
 #      loopback and started by the server itself; the demo seeded on first start (accounts printed
 #      and kept in .data/demo-users.txt); /api and the web app on http://127.0.0.1:8080/.
+#   5. On first start, scripts/push-demo.mjs sweeps the demo studies (a depot roof of 4,800 variants, a
+#      sized variant of it, a sized footbridge study) and pushes them as the demo engineer.
 # Ctrl-C stops the server, then MariaDB. A second `npm start` reuses everything in .data/ (git-ignored).
 # Settings: PORT, DB_PORT, PANELPOINT_DATA (default .data), LOG_LEVEL (warn; info logs each request);
 # S3_* and SMTP_* use real services instead of the fake S3 and the sink.
@@ -43,6 +45,8 @@ export JWT_SECRET DATA_DIR="$DATA" DEMO_USERS_FILE="$DATA/demo-users.txt" WEB_DI
 # cleanly before MariaDB does.
 node --import tsx server/main.ts &
 pid=$!
+# First start: sweep the demo studies and push them as the demo engineer (skipped once done).
+node scripts/push-demo.mjs "$DATA" "$PORT" || true
 trap 'kill -INT "$pid" 2>/dev/null || true' INT TERM
 while kill -0 "$pid" 2>/dev/null; do
   wait "$pid" || true
