@@ -46,7 +46,9 @@ function parseJson(kind: string, data: Buffer): unknown {
 function checkType(kind: UploadKind, name: string, mimetype: string, data: Buffer): void {
   const ext = /\.[^./\\]+$/.exec(name.toLowerCase())?.[0] ?? '';
   if (ext && !EXTENSIONS[kind].includes(ext)) throw unsupported(`A ${kind} upload must be a ${EXTENSIONS[kind].join(' or ')} file, not ${ext}.`);
-  if (/^(image|audio|video|font)\//.test(mimetype) && mimetype !== 'image/vnd.dxf') throw unsupported(`A ${kind} upload cannot be ${mimetype}.`);
+  // Study, model and drawing files are text: only application/* and text/* types (and DXF's image/vnd.dxf) pass.
+  const top = mimetype.split('/')[0];
+  if (mimetype && top !== 'application' && top !== 'text' && mimetype !== 'image/vnd.dxf') throw unsupported(`A ${kind} upload cannot be ${mimetype}.`);
   if (kind === 'dxf' && isBinaryDxf(data)) throw unsupported('Binary DXF is not read: save the drawing as ASCII DXF.');
   if (data.includes(0)) throw unsupported(`A ${kind} upload must be a text file; this one holds binary data.`);
 }
