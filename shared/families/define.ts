@@ -50,10 +50,11 @@ export function defineFamily(d: FamilyDef): TrussFamily {
       return [...(d.panelRule ? checkPanels(p, d.panels, d.panelRule) : []), ...(d.extraCheck ? d.extraCheck(p) : [])];
     },
     topologyKey(p: Params): string {
-      const parts = [d.id, `n=${num(p, d.panels)}`];
-      if (supports) parts.push(supportsKey(p, supports));
-      if (d.extraKey) parts.push(d.extraKey(p));
-      return parts.join('|');
+      // called for every variant of a sweep: plain concatenation, no array
+      let key = `${d.id}|n=${num(p, d.panels)}`;
+      if (supports) key += `|${supportsKey(p, supports)}`;
+      if (d.extraKey) key += `|${d.extraKey(p)}`;
+      return key;
     },
     topology(p: Params): FamilyTopology {
       const n = num(p, d.panels);

@@ -10,7 +10,7 @@ import { classify } from '../engine/classify';
 import type { Structure } from '../engine/structure';
 import { addCaseLoads } from '../families/loads';
 import { variantAt, passes, type SpacePlan } from './space';
-import { variantId } from './variant-id';
+import { VariantIdHasher } from './variant-id';
 import type { PreparedDesign } from '../design/prepare';
 import { emptyDesign, VariantSizer, type DesignFigures } from './evaluate-design';
 
@@ -60,6 +60,7 @@ interface TopoEntry {
 export class VariantEvaluator {
   private readonly topos = new Map<string, TopoEntry>();
   private readonly scratch: Params = {};
+  private readonly ids: VariantIdHasher;
   readonly record: VariantRecord = {
     index: 0, id: '', params: {}, status: 'error', joints: 0, members: 0, reactions: 0, k: 0, s: 0, critical: false,
     peakTension: 0, peakTensionMember: '', peakTensionCombination: '', peakCompression: 0, peakCompressionMember: '',
@@ -73,6 +74,7 @@ export class VariantEvaluator {
   private readonly swFactor: Float64Array;
 
   constructor(readonly setup: SweepSetup) {
+    this.ids = new VariantIdHasher(setup.family.id, setup.plan.paramNames);
     const d = setup.design;
     const sized = d !== undefined && d.selfWeight;
     this.caseLoads = sized ? setup.caseLoads.map((ls) => ls.filter((l) => l.kind !== 'self-weight')) : setup.caseLoads;
@@ -92,7 +94,7 @@ export class VariantEvaluator {
     const r = this.record;
     r.index = index;
     r.params = p;
-    r.id = variantId(family.id, p, plan.paramNames);
+    r.id = this.ids.id(p);
     try {
       const problems = family.check(p);
       if (problems.length) return this.fail(problems.join('; '));
@@ -145,14 +147,15 @@ export class VariantEvaluator {
     const caseLoads = this.caseLoads;
     t.caseBuf.fill(0);
     for (let c = 0; c < cases.length; c++) addCaseLoads(caseLoads[c], topo, x, y, t.area, t.caseBuf.subarray(c * n2, (c + 1) * n2));
-    t.loads.fill(0);
+    const loads = t.loads, caseBuf = t.caseBuf;
+    loads.fill(0);
     for (let q = 0; q < combinations.length; q++) {
       const f = combinations[q].factors;
       for (let c = 0; c < cases.length; c++) {
         const fac = f[c];
         if (fac === 0) continue;
         const lo = q * n2, co = c * n2;
-        for (let i = 0; i < n2; i++) t.loads[lo + i] += fac * t.caseBuf[co + i];
+        for (let i = 0; i < n2; i++) loads[lo + i] += fac * caseBuf[co + i];
       }
     }
     const nC = combinations.length;

@@ -3,6 +3,7 @@
  * same way (forces to 1e-6 kN, displacements to 1e-9 m, ratios to 1e-3), so they agree exactly.
  */
 import type { VariantRecord } from './evaluate';
+import type { DesignFigures } from './evaluate-design';
 import type { SummaryInput } from './summary';
 
 /** The rounding of every stored figure: forces to 1e-6 kN, displacements to 1e-9 m, ratios to 1e-3. */
@@ -13,21 +14,24 @@ const r6 = (v: number) => (Number.isFinite(v) ? String(roundForce(v)) : 'null');
 const r9 = (v: number) => (Number.isFinite(v) ? String(roundDisp(v)) : 'null');
 const r3 = (v: number) => (Number.isFinite(v) ? String(roundRatio(v)) : 'null');
 
-/** The figures of a record as they are stored (rounded), for the summary. */
-export function storedFigures(r: VariantRecord, paramNames: readonly string[]): SummaryInput {
+/**
+ * The figures of a record as they are stored (rounded), for the summary.
+ * @param out - filled and returned when given (a sweep reuses one: the summary copies what it keeps)
+ */
+export function storedFigures(r: VariantRecord, paramNames: readonly string[], out?: SummaryInput): SummaryInput {
   const stable = r.status === 'determinate' || r.status === 'indeterminate';
   void paramNames;
-  return {
-    index: r.index, id: r.id, params: r.params, status: r.status, critical: r.critical, reason: r.reason,
-    peakTension: stable && r.peakTensionMember ? roundForce(r.peakTension) : NaN,
-    peakCompression: stable && r.peakCompressionMember ? roundForce(r.peakCompression) : NaN,
-    maxDisplacement: stable && r.maxDisplacementNode ? roundDisp(r.maxDisplacement) : NaN,
-    spanOverDeflection: stable && Number.isFinite(r.spanOverDeflection) ? roundRatio(r.spanOverDeflection) : NaN,
-    designStatus: stable ? r.design.status : '',
-    weight: stable && r.design.status && Number.isFinite(r.design.weight) ? roundRatio(r.design.weight) : NaN,
-    maxUtilisation: stable && r.design.status && Number.isFinite(r.design.maxUtilisation) ? Math.round(r.design.maxUtilisation * 1e4) / 1e4 : NaN,
-    deflectionOk: stable && r.design.status ? r.design.deflectionOk : undefined,
-  };
+  const o = out ?? ({} as SummaryInput);
+  o.index = r.index; o.id = r.id; o.params = r.params; o.status = r.status; o.critical = r.critical; o.reason = r.reason;
+  o.peakTension = stable && r.peakTensionMember ? roundForce(r.peakTension) : NaN;
+  o.peakCompression = stable && r.peakCompressionMember ? roundForce(r.peakCompression) : NaN;
+  o.maxDisplacement = stable && r.maxDisplacementNode ? roundDisp(r.maxDisplacement) : NaN;
+  o.spanOverDeflection = stable && Number.isFinite(r.spanOverDeflection) ? roundRatio(r.spanOverDeflection) : NaN;
+  o.designStatus = stable ? r.design.status : '';
+  o.weight = stable && r.design.status && Number.isFinite(r.design.weight) ? roundRatio(r.design.weight) : NaN;
+  o.maxUtilisation = stable && r.design.status && Number.isFinite(r.design.maxUtilisation) ? Math.round(r.design.maxUtilisation * 1e4) / 1e4 : NaN;
+  o.deflectionOk = stable && r.design.status ? r.design.deflectionOk : undefined;
+  return o;
 }
 const q = (s: string) => JSON.stringify(s);
 const value = (v: number | string) => (typeof v === 'number' ? (Number.isFinite(v) ? String(v) : 'null') : q(v));
@@ -96,22 +100,28 @@ export function formatRecord(r: VariantRecord, paramNames: readonly string[], ou
   json += `,"spanOverDeflection":${ratio},"reason":${r.reason ? q(r.reason) : 'null'}`;
   csv += `,${ratio === 'null' ? '' : ratio},${csvText(r.reason)}`;
   if (design) {
-    const d = r.design;
-    if (d.status && d.status !== 'analysis-failed') {
-      const w = r3(d.weight), mass = r3(d.mass), u = String(Math.round(d.maxUtilisation * 1e4) / 1e4);
-      const ok = d.deflectionOk === undefined ? 'null' : String(d.deflectionOk);
-      json += `,"design":{"status":"${d.status}","weight":${w},"mass":${mass},"maxUtilisation":${u},"member":${qc(d.maxUtilisationMember)},"check":${qc(d.governingCheck)},"combination":${qc(d.governingCombination)},"deflectionOk":${ok},"sections":${q(d.sections)},"reason":${d.reason ? q(d.reason) : 'null'}}`;
-      csv += `,${d.status},${w},${mass},${u},${d.maxUtilisationMember},${csvText(d.governingCheck)},${d.governingCombination},${ok === 'null' ? '' : ok},${csvText(d.sections)},${csvText(d.reason)}`;
-    } else {
-      json += ',"design":null';
-      csv += ',,,,,,,,,,';
-    }
+    const d = formatDesignPart(r.design);
+    json += d.json;
+    csv += d.csv;
   }
   json += '}\n';
   csv += '\n';
   out.json = json;
   out.csv = csv;
   return out;
+}
+
+/** The member design part of a record: JSON (after a comma) and CSV cells (each after a comma). */
+export function formatDesignPart(d: DesignFigures): FormattedRecord {
+  if (d.status && d.status !== 'analysis-failed') {
+    const w = r3(d.weight), mass = r3(d.mass), u = String(Math.round(d.maxUtilisation * 1e4) / 1e4);
+    const ok = d.deflectionOk === undefined ? 'null' : String(d.deflectionOk);
+    return {
+      json: `,"design":{"status":"${d.status}","weight":${w},"mass":${mass},"maxUtilisation":${u},"member":${qc(d.maxUtilisationMember)},"check":${qc(d.governingCheck)},"combination":${qc(d.governingCombination)},"deflectionOk":${ok},"sections":${q(d.sections)},"reason":${d.reason ? q(d.reason) : 'null'}}`,
+      csv: `,${d.status},${w},${mass},${u},${d.maxUtilisationMember},${csvText(d.governingCheck)},${d.governingCombination},${ok === 'null' ? '' : ok},${csvText(d.sections)},${csvText(d.reason)}`,
+    };
+  }
+  return { json: ',"design":null', csv: ',,,,,,,,,,' };
 }
 
 function peakJson(key: string, stable: boolean, v: string, m: string, c: string, who: string): string {

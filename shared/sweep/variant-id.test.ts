@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { Study } from '../schemas/study';
-import { canonicalNumber, fnv1a64, studyHash, variantId, variantText } from './variant-id';
+import { canonicalNumber, fnv1a64, studyHash, variantId, variantText, VariantIdHasher } from './variant-id';
 
 /** FNV-1a 64-bit written the plain way with BigInt, over UTF-8 bytes (Fowler, Noll, Vo). */
 function fnvReference(text: string): string {
@@ -98,4 +98,20 @@ it('canonicalNumber is Number(x.toPrecision(12)).toString() across magnitudes', 
   for (const x of [0, 1, -1, 7, 123456789012, 999999999999, 1e12, 1e12 + 1, 12345678901234, 2 ** 53, -(2 ** 40), 1.5, 1e-7, 1 / 7, -2.25e15, 5e-324]) {
     expect(canonicalNumber(x)).toBe(literal(x));
   }
+});
+
+describe('VariantIdHasher', () => {
+  it('gives the ids of variantId, for numbers, options, non-ASCII strings and repeated values', () => {
+    const names = ['span', 'depth', 'panels', 'supports', 'label'];
+    const hasher = new VariantIdHasher('pratt', names);
+    const params = [
+      { span: 24, depth: 2.25, panels: 8, supports: 'pin-roller', label: 'a' },
+      { span: 24, depth: 0.1 + 0.2, panels: 8, supports: 'pin-pin', label: 'a' },
+      { span: 24, depth: 0.3, panels: 8, supports: 'pin-pin', label: 'a' },
+      { span: 24, depth: -0, panels: 1e15, supports: 'pin-pin', label: 'ψ east' },
+      { span: NaN, depth: 2.25, panels: 8, supports: 'pin-roller', label: 'a' },
+    ];
+    for (const p of [...params, ...params]) expect(hasher.id(p)).toBe(variantId('pratt', p, names));
+    expect(new VariantIdHasher('brücke', names).id(params[0])).toBe(variantId('brücke', params[0], names));
+  });
 });

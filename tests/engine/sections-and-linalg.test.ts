@@ -6,7 +6,7 @@ import { Matrix, solve as mlSolve } from 'ml-matrix';
 import { frame, prattSpec } from '../fixtures/frames';
 import { analyze } from '../../shared/engine/analyze';
 import { cutSection } from '../../shared/engine/sections';
-import { factorBandLdlt, solveBandLdlt } from '../../shared/engine/linalg/banded-ldlt';
+import { factorBandLdlt, solveBandLdlt, solveBandLdltMulti } from '../../shared/engine/linalg/banded-ldlt';
 import { solveDense } from '../../shared/engine/linalg/dense-lu';
 
 describe('method of sections', () => {
@@ -49,6 +49,15 @@ describe('linear algebra kernels against ml-matrix (LU with partial pivoting)', 
     solveBandLdlt({ n, bw, first }, band, invD, f, u);
     const ref = mlSolve(K, Matrix.columnVector(Array.from(f)));
     for (let i = 0; i < n; i++) expect(u[i]).toBeCloseTo(ref.get(i, 0), 10);
+    // k right-hand sides interleaved (k = 3 takes the unrolled path), each against ml-matrix
+    for (const k of [1, 2, 3, 4]) {
+      const F = Matrix.zeros(n, k);
+      const U = new Float64Array(n * k);
+      for (let i = 0; i < n; i++) for (let c = 0; c < k; c++) { const v = rnd(); F.set(i, c, v); U[i * k + c] = v; }
+      solveBandLdltMulti({ n, bw, first }, band, invD, U, k);
+      const R = mlSolve(K, F);
+      for (let i = 0; i < n; i++) for (let c = 0; c < k; c++) expect(U[i * k + c]).toBeCloseTo(R.get(i, c), 10);
+    }
   });
 
   it('dense LU agrees with ml-matrix and reports a singular matrix', () => {

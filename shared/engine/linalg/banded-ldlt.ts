@@ -89,6 +89,10 @@ export function solveBandLdlt(shape: BandShape, band: Float64Array, invD: Float6
  * entry of L is read once for all of them. Same factor as {@link solveBandLdlt}.
  */
 export function solveBandLdltMulti(shape: BandShape, band: Float64Array, invD: Float64Array, u: Float64Array, k: number): void {
+  if (k === 3) {
+    solveBandLdlt3(shape, band, invD, u);
+    return;
+  }
   const { n, bw, first } = shape;
   const W = bw + 1;
   for (let i = 0; i < n; i++) {
@@ -111,6 +115,45 @@ export function solveBandLdltMulti(shape: BandShape, band: Float64Array, invD: F
       const l = band[ri + j];
       const oj = j * k;
       for (let c = 0; c < k; c++) u[oj + c] -= l * u[oi + c];
+    }
+  }
+}
+
+/** {@link solveBandLdltMulti} for three right-hand sides (the usual sweep: three combinations), unrolled. */
+function solveBandLdlt3(shape: BandShape, band: Float64Array, invD: Float64Array, u: Float64Array): void {
+  const { n, bw, first } = shape;
+  const W = bw + 1;
+  for (let i = 0; i < n; i++) {
+    const ri = i * W + bw - i;
+    const oi = 3 * i;
+    let a = u[oi], b = u[oi + 1], c = u[oi + 2];
+    for (let j = first[i]; j < i; j++) {
+      const l = band[ri + j];
+      const oj = 3 * j;
+      a -= l * u[oj];
+      b -= l * u[oj + 1];
+      c -= l * u[oj + 2];
+    }
+    u[oi] = a;
+    u[oi + 1] = b;
+    u[oi + 2] = c;
+  }
+  for (let i = 0; i < n; i++) {
+    const d = invD[i];
+    u[3 * i] *= d;
+    u[3 * i + 1] *= d;
+    u[3 * i + 2] *= d;
+  }
+  for (let i = n - 1; i >= 0; i--) {
+    const ri = i * W + bw - i;
+    const oi = 3 * i;
+    const a = u[oi], b = u[oi + 1], c = u[oi + 2];
+    for (let j = first[i]; j < i; j++) {
+      const l = band[ri + j];
+      const oj = 3 * j;
+      u[oj] -= l * a;
+      u[oj + 1] -= l * b;
+      u[oj + 2] -= l * c;
     }
   }
 }
