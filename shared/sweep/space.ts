@@ -102,6 +102,7 @@ export function variantAt(plan: SpacePlan, index: number, out: Params = {}): Par
  * @param params - from `variantAt` on the same plan
  */
 export function passes(plan: SpacePlan, params: Readonly<Params>): boolean {
+  if (plan.filters.length === 0) return true;
   const scope = plan.scope;
   for (const k in params) scope.set(k, params[k]);
   for (const f of plan.filters) {
@@ -121,9 +122,11 @@ function fill(plan: SpacePlan, index: number, out: Params, issues?: Issue[]): vo
     throw new RangeError(`variant index ${index} is outside 0..${plan.size - 1}`);
   }
   const { scope, base, dimensions } = plan;
+  // The expression scope is read only by derived parameters and filters: most studies have neither.
+  const scoped = plan.derived.length > 0 || plan.filters.length > 0;
   for (const k in base) {
     out[k] = base[k];
-    scope.set(k, base[k]);
+    if (scoped) scope.set(k, base[k]);
   }
   let rest = index;
   for (let d = dimensions.length - 1; d >= 0; d--) {
@@ -133,7 +136,7 @@ function fill(plan: SpacePlan, index: number, out: Params, issues?: Issue[]): vo
     for (let k = 0; k < dim.names.length; k++) {
       const v = dim.columns[k][digit];
       out[dim.names[k]] = v;
-      scope.set(dim.names[k], v);
+      if (scoped) scope.set(dim.names[k], v);
     }
   }
   for (const e of plan.derived) {
