@@ -47,7 +47,10 @@ export function defineFamily(d: FamilyDef): TrussFamily {
       const slopeSet = d.params.includes(SLOPE) && num(p, SLOPE) > 0;
       const basic = checkParams(slopeSet ? d.params.filter((s) => s.name !== 'rise') : d.params, p);
       if (basic.length) return basic;
-      return [...(d.panelRule ? checkPanels(p, d.panels, d.panelRule) : []), ...(d.extraCheck ? d.extraCheck(p) : [])];
+      const panels = d.panelRule ? checkPanels(p, d.panels, d.panelRule) : basic;
+      const extra = d.extraCheck ? d.extraCheck(p) : basic;
+      // called for every variant of a sweep: no new array when all is well
+      return extra.length === 0 ? panels : panels.length === 0 ? extra : [...panels, ...extra];
     },
     topologyKey(p: Params): string {
       // called for every variant of a sweep: plain concatenation, no array
