@@ -10,6 +10,7 @@ import * as m002 from './migrations/002-studies-runs';
 import * as m003 from './migrations/003-review-files';
 import * as m004 from './migrations/004-captured-mail';
 import * as m005 from './migrations/005-run-queries';
+import * as m006 from './migrations/006-lean-variant-indexes';
 
 interface MigrationModule {
   up: MigrationFn<QueryInterface>;
@@ -22,6 +23,7 @@ const MIGRATIONS: [string, MigrationModule][] = [
   ['003-review-files', m003],
   ['004-captured-mail', m004],
   ['005-run-queries', m005],
+  ['006-lean-variant-indexes', m006],
 ];
 
 export function createMigrator(sequelize: Sequelize): Umzug<QueryInterface> {

@@ -1,7 +1,7 @@
 /**
- * A push: the NDJSON body read line by line as it arrives, the variants inserted with bulkCreate
- * per line, all inside one transaction: any failure rolls everything back. Pushing a shard the
- * run already holds changes nothing; a resumed shard adds only the variants that follow what is
+ * A push: the NDJSON body read line by line as it arrives, the variants of each line inserted as
+ * one batch (runs-insert.ts), all inside one transaction: any failure rolls everything back.
+ * Pushing a shard the run already holds changes nothing; a resumed shard adds only the variants that follow what is
  * stored; a new shard of the same study and shard count joins the same run.
  */
 import type { Readable } from 'node:stream';
@@ -17,6 +17,9 @@ import { paramColumnsFor, rowsOfLine, type RowContext } from './runs-push-rows';
 import { mergedSummary, publicShards, runStatus, shardEntry, shardsOf, withShard, type PublicShard } from './runs-shards';
 import { ndjsonLines, parseLine, type NdjsonLine } from './runs-ndjson';
 import { findOrCreateStudy } from './studies.service';
+
+/** Variant batches sent to the database before the oldest has answered. */
+const IN_FLIGHT = 2;
 
 export interface PushAnswer {
   runId: string;
@@ -86,22 +89,26 @@ async function store(header: PushHeader, lines: AsyncGenerator<NdjsonLine>, acce
   const keepAfter = before?.lastIndex ?? -1;
   let received = 0;
   let inserted = 0;
-  let pending: Promise<unknown> = Promise.resolve();
+  // Inserts in flight: one executing, the next already sent (the connector pipelines commands on
+  // the transaction's connection), so the database never waits for this process to read, check
+  // and encode a line. A failure of either surfaces below and rolls the whole push back.
+  const pending: Promise<unknown>[] = [];
   const insert = variantInserter(t);
   try {
     for await (const line of lines) {
       const { rows, records } = rowsOfLine(parseLine(line), line.n, ctx, keepAfter);
       received += records;
       if (!rows.length) continue;
-      await pending; // one insert in flight while the next line is read and checked
+      if (pending.length >= IN_FLIGHT) await pending.shift();
       inserted += rows.length;
-      pending = insert(rows);
-      pending.catch(() => undefined); // handled: awaited above or below, never left to crash the process
+      const p = insert(rows);
+      p.catch(() => undefined); // handled: awaited above or below, never left to crash the process
+      pending.push(p);
     }
   } finally {
-    await pending.catch(() => undefined);
+    await Promise.allSettled(pending);
   }
-  await pending;
+  for (const p of pending) await p;
   if (received !== summary.evaluated) {
     throw new HttpError(422, 'push-incomplete', `The push holds ${received} variants, but its summary counts ${summary.evaluated}; nothing was stored.`,
       [{ path: 'summary.evaluated', message: `is ${summary.evaluated}; variants received: ${received}` }]);

@@ -8,7 +8,9 @@ export type ParamColumn = (typeof PARAM_COLUMNS)[number];
  * One variant of a run, as the CLI records it (shared/sweep/record-format.ts). Forces in kN,
  * displacements in m, weight in kN. `runPk` is runs.id; `variantId` the 16-hex stable id.
  * Peaks are null for unstable and failed variants. p1..p6 copy the numeric parameters that
- * charts bin on (see Run.paramColumns), each indexed with runPk.
+ * charts bin on (see Run.paramColumns); p1..p4 are indexed with runPk, p5 and p6 are not
+ * (migration 006: few families have a fifth numeric parameter, and every index costs each
+ * pushed row an insert).
  */
 export class Variant extends Model<InferAttributes<Variant>, InferCreationAttributes<Variant>> {
   declare id: CreationOptional<number>;
