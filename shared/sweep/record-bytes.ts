@@ -5,7 +5,7 @@
  * `formatRecord` stays the readable definition of the format.
  */
 import type { VariantRecord } from './evaluate';
-import { formatDesignPart } from './record-format';
+import { csvText, formatDesignPart } from './record-format';
 
 /** A growable byte buffer, reused from batch to batch. */
 export class ByteBuffer {
@@ -158,14 +158,7 @@ export class ByteBuffer {
   }
   /** A CSV cell: quoted (with doubled quotes) when it holds a quote, comma or line break. */
   csvString(s: string): void {
-    for (let i = 0; i < s.length; i++) {
-      const c = s.charCodeAt(i);
-      if (c === 34 || c === 44 || c === 10 || c === 13) {
-        this.text(`"${s.replace(/"/g, '""')}"`);
-        return;
-      }
-    }
-    this.text(s);
+    this.text(csvText(s));
   }
 }
 
@@ -209,7 +202,7 @@ export class RecordEncoder {
     let t = cache.get(key);
     if (t === undefined) {
       const json = typeof v === 'number' ? (Number.isFinite(v) ? String(v) : 'null') : JSON.stringify(v);
-      const csv = typeof v === 'number' ? String(v) : /[",\n\r]/.test(String(v ?? '')) ? `"${String(v ?? '').replace(/"/g, '""')}"` : String(v ?? '');
+      const csv = typeof v === 'number' ? String(v) : csvText(String(v ?? ''));
       t = { json: bytesOf(json), csv: bytesOf(csv) };
       if (cache.size < VALUES_KEPT) cache.set(key, t);
     }

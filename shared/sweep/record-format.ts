@@ -55,7 +55,8 @@ export function csvHeader(paramNames: readonly string[], design = false): string
   return ['index', 'id', ...paramNames, ...FIGURE_COLUMNS, ...(design ? DESIGN_COLUMNS : [])].join(',') + '\n';
 }
 
-function csvText(s: string): string {
+/** A CSV cell: quoted (with doubled quotes) when it holds a quote, comma or line break. */
+export function csvText(s: string): string {
   return /[",\n\r]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s;
 }
 
