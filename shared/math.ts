@@ -1,7 +1,9 @@
 /**
  * The one mathjs instance of Panelpoint, built from only the pieces it uses (units, and the
  * parser with the operators and functions study expressions may call). Bundled, it loads in a
- * fraction of the time of the full library, which every sweep worker would otherwise pay.
+ * fraction of the time of the full library. Built on first use: a sweep worker that gets its
+ * quantities already in SI never builds it (building it costs each thread about 0.1 s of CPU and
+ * as much again in optimising compiler work that would compete with the sweep).
  */
 import {
   create, absDependencies, acosDependencies, addDependencies, asinDependencies, atan2Dependencies, atanDependencies,
@@ -15,8 +17,8 @@ import {
   unequalDependencies, unitDependencies, andDependencies, orDependencies, xorDependencies,
 } from 'mathjs';
 
-/** The shared instance: `math.parse`, `math.unit`, node classes (`math.SymbolNode`...). */
-export const math = create({
+function build() {
+  const m = create({
   parseDependencies, compileDependencies, unitDependencies, createUnitDependencies,
   addDependencies, subtractDependencies, multiplyDependencies, divideDependencies, powDependencies, modDependencies,
   unaryMinusDependencies, unaryPlusDependencies, equalDependencies, unequalDependencies, largerDependencies,
@@ -26,8 +28,16 @@ export const math = create({
   signDependencies, sinDependencies, cosDependencies, tanDependencies, asinDependencies, acosDependencies, atanDependencies,
   atan2Dependencies, sinhDependencies, coshDependencies, tanhDependencies, isIntegerDependencies, equalTextDependencies,
   compareTextDependencies, piDependencies, eDependencies, tauDependencies,
-});
+  });
+  // Trade units mathjs lacks: ksi (kip per square inch), psf (pound-force per square foot),
+  // plf and klf (pound-force and kip per linear foot).
+  m.createUnit({ ksi: '1000 psi', psf: '1 lbf/ft^2', plf: '1 lbf/ft', klf: '1 kip/ft' });
+  return m;
+}
 
-// Trade units mathjs lacks: ksi (kip per square inch), psf (pound-force per square foot),
-// plf and klf (pound-force and kip per linear foot).
-math.createUnit({ ksi: '1000 psi', psf: '1 lbf/ft^2', plf: '1 lbf/ft', klf: '1 kip/ft' });
+let instance: ReturnType<typeof build> | undefined;
+
+/** The shared instance: `mathjs().parse`, `mathjs().unit`, node classes (`mathjs().SymbolNode`...). */
+export function mathjs(): ReturnType<typeof build> {
+  return (instance ??= build());
+}

@@ -4,7 +4,7 @@
  */
 import type { Unit } from 'mathjs';
 import { messages } from './errors';
-import { math } from './math';
+import { mathjs } from './math';
 
 /** A converted number, or why it could not be converted. */
 export type UnitResult =
@@ -28,6 +28,9 @@ const unknown = (u: string, why = ''): UnitResult => ({ error: messages['unknown
 const wrong = (u: string, noun: string): UnitResult => ({ error: messages['wrong-dimension'](u, noun), code: 'wrong-dimension' });
 const outOfRange = (q: string): UnitResult => ({ error: messages['out-of-range'](`'${q}'`), code: 'out-of-range' });
 
+/** Units that parseQuantity may take a bare number in without parsing (they are known to mathjs). */
+const KNOWN = new Set(NOUNS.map((d) => d.si));
+
 /** Accept the spellings people type: m², mm³, kN·m. */
 function normalise(text: string): string {
   return text.trim().replace(/²/g, '^2').replace(/³/g, '^3').replace(/[·⋅]/g, '*');
@@ -35,7 +38,7 @@ function normalise(text: string): string {
 
 function parse(text: string): Unit | undefined {
   try {
-    return math.unit(text);
+    return mathjs().unit(text);
   } catch {
     return undefined;
   }
@@ -58,9 +61,9 @@ function isResult(x: Unit | UnitResult): x is UnitResult {
 function factor(text: string, dim: Dimension): UnitResult {
   const u = parseUnit(text);
   if (isResult(u)) return u;
-  const target = math.unit(dim.si);
+  const target = mathjs().unit(dim.si);
   if (!u.equalBase(target)) return wrong(text, dim.noun);
-  return { value: math.unit(1, normalise(text)).toNumber(dim.si) };
+  return { value: mathjs().unit(1, normalise(text)).toNumber(dim.si) };
 }
 
 /** Metres per one `u` (e.g. 'mm' → 0.001, 'ft' → 0.3048). */
@@ -91,9 +94,14 @@ export function modulusFactor(u: string): UnitResult {
  * @returns `{ value }` in `targetUnit`, or `{ error }` for an unknown unit or one of another dimension
  */
 export function parseQuantity(value: number | string, defaultUnit: string, targetUnit: string): UnitResult {
+  // A bare number already in the target unit converts by a factor of one: no parsing (sweep workers
+  // get their quantities this way, and never build the unit library).
+  if (typeof value === 'number' && defaultUnit === targetUnit && KNOWN.has(targetUnit)) {
+    return Number.isFinite(value) ? { value } : { error: messages['schema-not-finite'](String(value)), code: 'out-of-range' };
+  }
   const target = parseUnit(targetUnit);
   if (isResult(target)) return target;
-  const noun = NOUNS.find((d) => target.equalBase(math.unit(d.si)))?.noun ?? `convertible to ${targetUnit}`;
+  const noun = NOUNS.find((d) => target.equalBase(mathjs().unit(d.si)))?.noun ?? `convertible to ${targetUnit}`;
   const text = typeof value === 'string' ? value.trim() : '';
   let q: Unit | undefined;
   if (typeof value === 'number' || (text !== '' && Number.isFinite(Number(text)))) {
@@ -102,7 +110,7 @@ export function parseQuantity(value: number | string, defaultUnit: string, targe
     const d = parseUnit(defaultUnit);
     if (isResult(d)) return d;
     if (!d.equalBase(target)) return wrong(defaultUnit, noun);
-    q = math.unit(n, normalise(defaultUnit));
+    q = mathjs().unit(n, normalise(defaultUnit));
   } else {
     q = parse(normalise(text));
     if (!q || (q.value as number | null) === null) return { error: messages['bad-quantity'](text), code: 'bad-quantity' };

@@ -34,20 +34,47 @@ export function defaultBatch(count: number, workers: number): number {
   return Math.max(16, Math.min(2000, Math.ceil(count / (workers * 16))));
 }
 
+/** Shared-memory slots that batches write their bytes into (see `SweepTask.into`). */
+class SlotPool {
+  private readonly free: number[] = [];
+  private readonly slots: { jsonl: Uint8Array; csv: Uint8Array }[] = [];
+  constructor(count: number, batch: number) {
+    // Bytes a variant takes, with room to spare (the benchmark study's lines are about 500 and 250;
+    // sized studies' add about 200 each). A batch that outgrows its slot falls back to copies.
+    const jsonlBytes = batch * 1024 + 65536;
+    const csvBytes = batch * 640 + 65536;
+    const memory = new SharedArrayBuffer(count * (jsonlBytes + csvBytes));
+    for (let i = 0; i < count; i++) {
+      const at = i * (jsonlBytes + csvBytes);
+      this.slots.push({ jsonl: new Uint8Array(memory, at, jsonlBytes), csv: new Uint8Array(memory, at + jsonlBytes, csvBytes) });
+      this.free.push(i);
+    }
+  }
+  get available(): boolean { return this.free.length > 0; }
+  take(): number { return this.free.pop()!; }
+  slot(i: number): { jsonl: Uint8Array; csv: Uint8Array } { return this.slots[i]; }
+  give(i: number): void { this.free.push(i); }
+}
+
 /** Run [start, end). @returns the next index not on disk (end unless stopped) */
 export async function driveSweep(d: SweepDrive): Promise<number> {
   const pool = new Piscina<SweepTask, SweepBatch>({ filename: workerFile, minThreads: d.workers, maxThreads: d.workers, idleTimeout: 500, concurrentTasksPerWorker: 1,
     // Bounded heaps keep a million-variant sweep well under 500 MB resident: batches are short-lived.
     resourceLimits: { maxOldGenerationSizeMb: 96, maxYoungGenerationSizeMb: 16 } });
-  const pending = new Map<number, SweepBatch>();
+  // Two batches per worker under way, and room for as many finished ones waiting their turn to be written.
+  const maxInflight = 2 * d.workers;
+  const slots = new SlotPool(2 * maxInflight, d.batch);
+  const pending = new Map<number, { b: SweepBatch; slot: number }>();
   const inflight = new Set<Promise<void>>();
   let next = d.start;
   let writeAt = d.start;
   let failure: unknown;
   const flush = () => {
-    for (let b = pending.get(writeAt); b; b = pending.get(writeAt)) {
+    for (let p = pending.get(writeAt); p; p = pending.get(writeAt)) {
+      const { b, slot } = p;
       pending.delete(writeAt);
       d.writer.append(b.jsonl, b.csv);
+      slots.give(slot); // written: its bytes may now be overwritten
       mergeSummary(d.summary, b.summary);
       writeAt = b.end;
       d.progress.update(writeAt - d.start);
@@ -55,12 +82,13 @@ export async function driveSweep(d: SweepDrive): Promise<number> {
     }
   };
   const submit = () => {
-    while (!failure && !d.stopping() && next < d.end && inflight.size < 2 * d.workers) {
+    while (!failure && !d.stopping() && next < d.end && inflight.size < maxInflight && slots.available) {
       const start = next;
       const end = Math.min(d.end, start + d.batch);
       next = end;
-      const p: Promise<void> = pool.run({ ...d.task, start, end }).then(
-        (b) => { pending.set(start, b); flush(); },
+      const slot = slots.take();
+      const p: Promise<void> = pool.run({ ...d.task, start, end, into: slots.slot(slot) }).then(
+        (b) => { pending.set(start, { b, slot }); flush(); },
         (e: unknown) => { failure ??= e; },
       ).finally(() => inflight.delete(p));
       inflight.add(p);

@@ -11,16 +11,27 @@ import { formatPath, issue, type Issue } from '../errors';
 const ajv = new Ajv({ allErrors: true, strict: true, useDefaults: false, verbose: true });
 const compiled = new WeakMap<object, ValidateFunction>();
 
-/** Compile a schema once; the result validates data and returns its issues (empty when valid). */
-export function compileSchema<T extends TSchema>(schema: T): (data: unknown) => Issue[] {
+function compiledFor(schema: TSchema): ValidateFunction {
   let validate = compiled.get(schema);
   if (!validate) {
     const id = typeof schema.$id === 'string' ? schema.$id : undefined;
     validate = (id && ajv.getSchema(id)) || ajv.compile(schema);
     compiled.set(schema, validate);
   }
-  const v = validate;
-  return (data) => (v(data) ? [] : toIssues(v.errors ?? [], data));
+  return validate;
+}
+
+/**
+ * A validator for a schema, compiled on its first call (modules declare theirs at load time; a
+ * sweep worker, which gets data its parent already checked, then never pays Ajv's code generation).
+ * The result validates data and returns its issues (empty when valid).
+ */
+export function compileSchema<T extends TSchema>(schema: T): (data: unknown) => Issue[] {
+  let v: ValidateFunction | undefined;
+  return (data) => {
+    v ??= compiledFor(schema);
+    return v(data) ? [] : toIssues(v.errors ?? [], data);
+  };
 }
 
 /** Path segments of a JSON pointer, with numbers where the data holds an array. */

@@ -5,9 +5,8 @@
  * property access, no matrices, no units.
  */
 import type { EvalFunction, MathNode, SymbolNode as SymbolNodeType } from 'mathjs';
-import { math } from '../math';
+import { mathjs } from '../math';
 
-const { parse, ConditionalNode, ConstantNode, FunctionNode, SymbolNode, Unit } = math;
 import { suggest } from './suggest';
 import type { Issue } from './types';
 
@@ -51,7 +50,7 @@ export interface CompiledExpression {
 export function parseExpression(text: string, path: string): ParsedExpression | Issue {
   let node: MathNode;
   try {
-    node = parse(text);
+    node = mathjs().parse(text);
   } catch (e) {
     const err = e as Error & { char?: number };
     // mathjs counts characters from 1
@@ -105,7 +104,7 @@ export function unknownSymbolIssues(
         ? `'${name}' is defined by this expression and cannot read itself`
         : later.has(name)
           ? `'${name}' is derived further down; move its line in \`derived\` above this one`
-          : Unit.isValuelessUnit(name)
+          : mathjs().Unit.isValuelessUnit(name)
             ? `'${name}' reads as a unit; study expressions use plain numbers, each in its parameter's unit`
             : `unknown name '${name}'${suggest(name, [...known])}`;
     issues.push({ path: expr.path, message, position: symbolPosition(expr.text, name) });
@@ -123,6 +122,7 @@ export function compileExpression(expr: ParsedExpression, name: string, stringNa
   const isText = (n: MathNode) =>
     (n.type === 'ConstantNode' && typeof (n as MathNode & { value: unknown }).value === 'string') ||
     (n.type === 'SymbolNode' && stringNames.has((n as SymbolNodeType).name));
+  const { ConditionalNode, ConstantNode, FunctionNode, SymbolNode } = mathjs();
   const yes = new ConstantNode(true);
   const no = new ConstantNode(false);
   const test = (n: MathNode) => new ConditionalNode(n, yes, no);

@@ -110,3 +110,35 @@ describe('ByteBuffer.text: UTF-8 as TextEncoder writes it', () => {
     expect([...b.take()]).toEqual([...new TextEncoder().encode(s)]);
   });
 });
+
+describe('ByteBuffer.writeInto: bytes written straight into a shared slot', () => {
+  it('returns a view of the slot when the bytes fit, and starts over', () => {
+    const slot = new Uint8Array(new SharedArrayBuffer(32)); // text() asks for room for 3 bytes a character
+    const b = new ByteBuffer(4);
+    b.writeInto(slot);
+    b.text('truss,7');
+    const out = b.finish();
+    expect(decode(out)).toBe('truss,7');
+    expect(out.buffer).toBe(slot.buffer); // no copy
+    expect(b.len).toBe(0);
+  });
+  it('moves to its own memory when the slot overflows, keeping every byte', () => {
+    const slot = new Uint8Array(new SharedArrayBuffer(8));
+    const b = new ByteBuffer(4);
+    b.writeInto(slot);
+    b.text('0123456');
+    b.text('789abcdef');
+    const out = b.finish();
+    expect(decode(out)).toBe('0123456789abcdef');
+    expect(out.buffer).not.toBe(slot.buffer);
+    b.writeInto(slot); // the next batch is given the slot again
+    b.text('xy');
+    expect(decode(b.finish())).toBe('xy');
+  });
+  it('writes into its own memory without a slot, as take() does', () => {
+    const b = new ByteBuffer(2);
+    b.writeInto(undefined);
+    b.text('Howe');
+    expect(decode(b.finish())).toBe('Howe');
+  });
+});

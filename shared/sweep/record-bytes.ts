@@ -11,19 +11,38 @@ import { csvText, formatDesignPart } from './record-format';
 export class ByteBuffer {
   buf: Uint8Array;
   len = 0;
+  /** The buffer's own memory (grown as needed); `buf` is this or a caller's target. */
+  private own: Uint8Array;
+  private target: Uint8Array | undefined;
   constructor(size = 1 << 16) {
-    this.buf = new Uint8Array(size);
+    this.buf = this.own = new Uint8Array(size);
   }
   /** Make room for `n` more bytes. */
   ensure(n: number): void {
     if (this.len + n <= this.buf.length) return;
-    const next = new Uint8Array(Math.max(this.buf.length * 2, this.len + n));
+    const next = new Uint8Array(Math.max(this.own.length, this.buf.length * 2, this.len + n));
     next.set(this.buf.subarray(0, this.len));
-    this.buf = next;
+    this.buf = this.own = next;
   }
   /** A copy of what was written (the buffer itself is reused). */
   take(): Uint8Array {
     const out = this.buf.slice(0, this.len);
+    this.len = 0;
+    return out;
+  }
+  /**
+   * Start over, writing into `target` (a slot of shared memory that another thread reads), or
+   * into the buffer's own memory when there is none. What outgrows `target` moves to own memory.
+   */
+  writeInto(target?: Uint8Array): void {
+    this.target = target;
+    this.buf = target ?? this.own;
+    this.len = 0;
+  }
+  /** What was written since `writeInto`: a view of its target when it all fitted, else a copy. Starts over. */
+  finish(): Uint8Array {
+    if (this.target === undefined || this.buf !== this.target) return this.take();
+    const out = this.target.subarray(0, this.len);
     this.len = 0;
     return out;
   }

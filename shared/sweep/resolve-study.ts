@@ -23,9 +23,13 @@ export interface ResolvedStudy {
   issues: { path: string; message: string; code?: string; position?: number }[];
 }
 
-/** Check a parsed study file and resolve it. */
-export function resolveStudy(data: unknown): ResolvedStudy {
-  const schemaIssues = validateStudy(data);
+/**
+ * Check a parsed study file and resolve it.
+ * @param opts.validated - the data already passed the study schema (a sweep worker, whose parent
+ *   checked the same bytes): skip the schema check
+ */
+export function resolveStudy(data: unknown, opts: { validated?: boolean } = {}): ResolvedStudy {
+  const schemaIssues = opts.validated ? [] : validateStudy(data);
   if (schemaIssues.length) return { issues: schemaIssues, combinations: [] };
   const study = data as Study;
   const family = getFamily(study.family);

@@ -2,7 +2,7 @@
  * Values of one parameter as a study gives them: checked against the family's parameter
  * (unit, bounds, integer, options) and expanded from lists and ranges.
  */
-import { math } from '../math';
+import { mathjs } from '../math';
 import type { VaryCount, VaryStep } from '../schemas/study';
 import type { Issue, ParamSpec, ParamValue } from './types';
 
@@ -28,7 +28,7 @@ export function checkValue(spec: ParamSpec | undefined, value: ParamValue, path:
   if (typeof value === 'number') v = value;
   else {
     try {
-      v = math.unit(value).toNumber(spec.unit);
+      v = mathjs().unit(value).toNumber(spec.unit);
     } catch (e) {
       const unitText = spec.unit ? ` in ${spec.unit}` : '';
       return { path, message: `'${spec.name}' takes a number${unitText}; cannot read "${value}": ${(e as Error).message}` };
