@@ -16,15 +16,15 @@ function value(v: number | string | undefined, what: string): number {
 }
 
 /** Add w (kN/m, downward positive) over the chain's segments, half of each segment to each end. */
-function addAlongChord(chain: Int32Array, x: Float64Array, y: Float64Array, w: number, byLength: boolean, out: Float64Array): void {
+function addAlongChord(chain: Int32Array, x: Float64Array, y: Float64Array, w: number, byLength: boolean, out: Float64Array, at: number): void {
   for (let k = 1; k < chain.length; k++) {
     const a = chain[k - 1];
     const b = chain[k];
     const dx = x[b] - x[a];
     const len = byLength ? Math.hypot(dx, y[b] - y[a]) : Math.abs(dx);
     const half = (w * len) / 2;
-    out[2 * a + 1] -= half;
-    out[2 * b + 1] -= half;
+    out[at + 2 * a + 1] -= half;
+    out[at + 2 * b + 1] -= half;
   }
 }
 
@@ -40,11 +40,12 @@ function addAlongChord(chain: Int32Array, x: Float64Array, y: Float64Array, w: n
  *   length, half to each end joint, downward.
  * - point: fx, fy added at the joint with that id, as the model file signs them (+ right, + up).
  * Loads of all cases in `loads` are added; filter to one case first.
+ * @param at - where joint 0's fx sits in `out` (a sweep keeps every case in one array)
  * @throws RangeError for a quantity left as a string or an unknown joint id (check with `unknownJoints`)
  */
 export function addCaseLoads(
   loads: readonly StudyLoad[], topo: FamilyTopology, x: Float64Array, y: Float64Array,
-  memberArea: Float64Array, out: Float64Array,
+  memberArea: Float64Array, out: Float64Array, at = 0,
 ): void {
   for (const load of loads) {
     if (load.kind === 'area' || load.kind === 'line') {
@@ -52,7 +53,7 @@ export function addCaseLoads(
         ? value(load.value, 'area load value') * value(load.spacing, 'spacing')
         : value(load.value, 'line load value');
       const chain = load.chord === 'top' ? topo.topChord : topo.bottomChord;
-      addAlongChord(chain, x, y, w, load.projection === 'length', out);
+      addAlongChord(chain, x, y, w, load.projection === 'length', out, at);
     } else if (load.kind === 'self-weight') {
       const given = load.weight === undefined ? undefined : value(load.weight, 'self-weight');
       for (let e = 0; e < topo.from.length; e++) {
@@ -60,14 +61,14 @@ export function addCaseLoads(
         const b = topo.to[e];
         const w = given ?? memberArea[e] * STEEL_UNIT_WEIGHT;
         const half = (w * Math.hypot(x[b] - x[a], y[b] - y[a])) / 2;
-        out[2 * a + 1] -= half;
-        out[2 * b + 1] -= half;
+        out[at + 2 * a + 1] -= half;
+        out[at + 2 * b + 1] -= half;
       }
     } else {
       const j = topo.nodeIds.indexOf(load.joint);
       if (j < 0) throw new RangeError(`point load at unknown joint ${load.joint}`);
-      out[2 * j] += value(load.fx, 'fx');
-      out[2 * j + 1] += value(load.fy, 'fy');
+      out[at + 2 * j] += value(load.fx, 'fx');
+      out[at + 2 * j + 1] += value(load.fy, 'fy');
     }
   }
 }

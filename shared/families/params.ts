@@ -66,27 +66,32 @@ export function riseOf(p: Params, span: number): number {
   return slope > 0 ? (span / 2) * Math.tan((slope * Math.PI) / 180) : num(p, RISE);
 }
 
+/** The empty answer of checkParams, shared (never modified: a problem starts a new array). */
+const NONE: readonly string[] = Object.freeze([]);
+
 /** Type, range, integer and option checks of every declared parameter; messages name the parameter. */
 export function checkParams(specs: readonly ParamSpec[], p: Params): string[] {
-  const out: string[] = [];
+  // called for every variant of a sweep: nothing is allocated unless something is wrong
+  let out: string[] | undefined;
   for (const s of specs) {
     const v = p[s.name];
     if (v === undefined) continue;
     if (s.options) {
-      if (typeof v !== 'string' || !s.options.includes(v)) out.push(`${s.name} must be one of ${s.options.join(', ')} (got ${String(v)})`);
+      if (typeof v !== 'string' || !s.options.includes(v)) (out ??= []).push(`${s.name} must be one of ${s.options.join(', ')} (got ${String(v)})`);
       continue;
     }
-    const unit = s.unit ? ` ${s.unit}` : '';
     if (typeof v !== 'number' || !Number.isFinite(v)) {
-      out.push(`${s.name} must be a finite number${unit ? ` in${unit}` : ''} (got ${JSON.stringify(v)})`);
+      (out ??= []).push(`${s.name} must be a finite number${s.unit ? ` in ${s.unit}` : ''} (got ${JSON.stringify(v)})`);
       continue;
     }
-    if (s.integer && !Number.isInteger(v)) out.push(`${s.name} must be a whole number (got ${v})`);
-    if (s.min !== undefined && v < s.min) out.push(`${s.name} must be at least ${s.min}${unit} (got ${v}${unit})`);
-    if (s.max !== undefined && v > s.max) out.push(`${s.name} must be at most ${s.max}${unit} (got ${v}${unit})`);
+    if (s.integer && !Number.isInteger(v)) (out ??= []).push(`${s.name} must be a whole number (got ${v})`);
+    if (s.min !== undefined && v < s.min) (out ??= []).push(`${s.name} must be at least ${s.min}${unitOf(s)} (got ${v}${unitOf(s)})`);
+    if (s.max !== undefined && v > s.max) (out ??= []).push(`${s.name} must be at most ${s.max}${unitOf(s)} (got ${v}${unitOf(s)})`);
   }
-  return out;
+  return out ?? (NONE as string[]);
 }
+
+const unitOf = (s: ParamSpec) => (s.unit ? ` ${s.unit}` : '');
 
 /** Parity or set rule on `panels`: [] when it holds. */
 export function checkPanels(p: Params, spec: ParamSpec, rule: 'even' | 'odd' | readonly number[]): string[] {
@@ -95,7 +100,7 @@ export function checkPanels(p: Params, spec: ParamSpec, rule: 'even' | 'odd' | r
   if (rule === 'even' && n % 2 !== 0) return [`panels must be even for this pattern (got ${n})`];
   if (rule === 'odd' && n % 2 !== 1) return [`panels must be odd for this pattern (got ${n})`];
   if (typeof rule !== 'string' && !rule.includes(n)) return [`panels must be one of ${rule.join(', ')} (got ${n})`];
-  return [];
+  return NONE as string[];
 }
 
 /** Rise/slope check of a pitched truss: the apex height derived from slope must stay in rise's range. */

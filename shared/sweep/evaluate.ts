@@ -107,7 +107,7 @@ export class VariantEvaluator {
 
   private fail(reason: string): VariantRecord {
     const r = this.record;
-    Object.assign(r.design, emptyDesign());
+    Object.assign(r.design, EMPTY_DESIGN);
     r.status = 'error';
     r.joints = r.members = r.reactions = r.k = r.s = 0;
     r.critical = false;
@@ -146,7 +146,7 @@ export class VariantEvaluator {
     const { cases, combinations } = this.setup;
     const caseLoads = this.caseLoads;
     t.caseBuf.fill(0);
-    for (let c = 0; c < cases.length; c++) addCaseLoads(caseLoads[c], topo, x, y, t.area, t.caseBuf.subarray(c * n2, (c + 1) * n2));
+    for (let c = 0; c < cases.length; c++) addCaseLoads(caseLoads[c], topo, x, y, t.area, t.caseBuf, c * n2);
     const loads = t.loads, caseBuf = t.caseBuf;
     loads.fill(0);
     for (let q = 0; q < combinations.length; q++) {
@@ -174,7 +174,7 @@ export class VariantEvaluator {
     if (kernel.status === STATUS_UNSTABLE) {
       r.status = 'unstable';
       clearPeaks(r);
-      Object.assign(r.design, emptyDesign());
+      Object.assign(r.design, EMPTY_DESIGN);
       r.reason = this.reasonFor(t, p);
       return;
     }
@@ -228,6 +228,9 @@ export class VariantEvaluator {
     return why;
   }
 }
+
+/** The design figures of a variant that is not sized (copied into the record, never changed). */
+const EMPTY_DESIGN = Object.freeze(emptyDesign());
 
 function clearPeaks(r: VariantRecord): void {
   r.peakTension = 0; r.peakTensionMember = ''; r.peakTensionCombination = '';

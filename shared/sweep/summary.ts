@@ -99,7 +99,7 @@ function offerBest(s: SweepSummary, e: BestEntry): void {
 }
 
 function offerReason(s: SweepSummary, status: string, reason: string, count: number, example: SweepSummary['reasons'][number]['example']): void {
-  const r = s.reasons.find((x) => x.status === status && x.reason === reason);
+  const r = findReason(s, status, reason);
   if (r) {
     r.count += count;
     if (example.index < r.example.index) r.example = example;
@@ -112,12 +112,6 @@ function offerReason(s: SweepSummary, status: string, reason: string, count: num
  *   family's names so a summary built live equals one rebuilt from the JSON lines
  */
 export function addToSummary(s: SweepSummary, v: SummaryInput, names?: readonly string[]): void {
-  const keep = (p: Params): Params => {
-    if (!names) return { ...p };
-    const o: Params = {};
-    for (const n of names) o[n] = p[n];
-    return o;
-  };
   s.evaluated++;
   const st = v.status as keyof SweepSummary['byStatus'];
   if (st in s.byStatus) s.byStatus[st]++;
@@ -135,14 +129,32 @@ export function addToSummary(s: SweepSummary, v: SummaryInput, names?: readonly 
     const mayEnter = !last || (value === last.value ? v.index < last.index : s.objective.sense === 'minimize' ? value < last.value : value > last.value);
     if (Number.isFinite(value) && mayEnter) {
       offerBest(s, {
-        index: v.index, id: v.id, params: keep(v.params), status: v.status, value,
+        index: v.index, id: v.id, params: keep(v.params, names), status: v.status, value,
         peakTension: v.peakTension, peakCompression: v.peakCompression, maxDisplacement: v.maxDisplacement, spanOverDeflection: v.spanOverDeflection,
         ...(v.designStatus ? { weight: v.weight, maxUtilisation: v.maxUtilisation } : {}),
       });
     }
   } else {
-    offerReason(s, v.status, v.reason, 1, { index: v.index, id: v.id, params: keep(v.params) });
+    // One reason repeats over many variants: count it without copying the variant.
+    const r = findReason(s, v.status, v.reason);
+    if (r) {
+      r.count++;
+      if (v.index < r.example.index) r.example = { index: v.index, id: v.id, params: keep(v.params, names) };
+    } else offerReason(s, v.status, v.reason, 1, { index: v.index, id: v.id, params: keep(v.params, names) });
   }
+}
+
+/** A copy of the parameters to keep (all of them when `names` is not given). */
+function keep(p: Params, names: readonly string[] | undefined): Params {
+  if (!names) return { ...p };
+  const o: Params = {};
+  for (const n of names) o[n] = p[n];
+  return o;
+}
+
+function findReason(s: SweepSummary, status: string, reason: string): SweepSummary['reasons'][number] | undefined {
+  for (const r of s.reasons) if (r.status === status && r.reason === reason) return r;
+  return undefined;
 }
 
 /** Merge b into a (same objective). */
