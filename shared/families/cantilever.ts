@@ -80,7 +80,7 @@ export const cantilever = defineFamily({
   panels: PANELS,
   span: SPAN,
   extraCheck,
-  extraKey: (p) => opt(p, TIP),
+  extraKey: TIP,
   build,
   prepare,
   top,

@@ -42,7 +42,7 @@ export const compoundLink = defineFamily({
   panels: COMPOUND_PANELS,
   panelRule: 'odd',
   span: FLAT_SPAN,
-  extraKey: (p) => opt(p, LINKAGE),
+  extraKey: LINKAGE,
   build,
   prepare: prepareFlat,
   top: flatTop,

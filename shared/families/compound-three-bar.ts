@@ -60,7 +60,7 @@ export const compoundThreeBar = defineFamily({
   panels: COMPOUND_PANELS,
   panelRule: 'odd',
   span: FLAT_SPAN,
-  extraKey: (p) => opt(p, LINKAGE),
+  extraKey: LINKAGE,
   build,
   prepare: prepareFlat,
   top: flatTop,

@@ -3,7 +3,7 @@
  * outlines that place them, and its parameter rules. Lengths in metres.
  */
 import { fillLayout, type LaidOutTopology, type Outline } from './builder';
-import { SLOPE, checkPanels, checkParams, num, supportsKey } from './params';
+import { ROLLER_ANGLE, SLOPE, checkPanels, checkParams, num, opt, supportsKey } from './params';
 import type { FamilyTopology, ParamSpec, Params, TrussFamily } from './types';
 
 /** What a family file states; everything else is common. */
@@ -20,8 +20,8 @@ export interface FamilyDef {
   span: ParamSpec;
   /** Family-specific checks beyond ranges and the panel rule. */
   extraCheck?: (p: Params) => string[];
-  /** Topology-changing parameters beyond panels and supports, as a key fragment. */
-  extraKey?: (p: Params) => string;
+  /** A topology-changing option parameter beyond panels and supports. */
+  extraKey?: ParamSpec;
   /** Build the topology for a valid, whole panel count. */
   build: (p: Params, panels: number) => LaidOutTopology;
   /** Write the shape constants the outlines read (depth, rise...) into k (length 8). No allocation. */
@@ -42,6 +42,7 @@ export function defineFamily(d: FamilyDef): TrussFamily {
     category: d.category,
     summary: d.summary,
     params: d.params,
+    topologyParams: [d.panels.name, ...(supports ? [supports.name, ROLLER_ANGLE.name] : []), ...(d.extraKey ? [d.extraKey.name] : [])],
     check(p: Params): string[] {
       // A slope above 0 replaces rise, whose own range then does not apply (checkRise covers it).
       const slopeSet = d.params.includes(SLOPE) && num(p, SLOPE) > 0;
@@ -56,7 +57,7 @@ export function defineFamily(d: FamilyDef): TrussFamily {
       // called for every variant of a sweep: plain concatenation, no array
       let key = `${d.id}|n=${num(p, d.panels)}`;
       if (supports) key += `|${supportsKey(p, supports)}`;
-      if (d.extraKey) key += `|${d.extraKey(p)}`;
+      if (d.extraKey) key += `|${opt(p, d.extraKey)}`;
       return key;
     },
     topology(p: Params): FamilyTopology {

@@ -72,6 +72,19 @@ describe('topologyKey and withDefaults', () => {
     const bow = getFamily('bowstring')!;
     expect(bow.topologyKey({ curve: 'circular' })).toBe(bow.topologyKey({ curve: 'parabolic' }));
   });
+  it.each(families.map((f) => [f.id, f] as const))('%s: the key reads only its topologyParams (a sweep reuses the topology when they repeat)', (_id, f) => {
+    for (const supports of [undefined, 'pin-inclined']) {
+      const base = withDefaults(f, supports && f.params.some((s) => s.name === 'supports') ? { supports } : {});
+      for (const spec of f.params) {
+        if (f.topologyParams.includes(spec.name)) continue;
+        const others = spec.options ? spec.options : [spec.min, spec.max, typeof spec.default === 'number' ? spec.default * 1.37 : undefined];
+        for (const v of others) {
+          if (v === undefined || v === base[spec.name]) continue;
+          expect(f.topologyKey({ ...base, [spec.name]: v }), `${spec.name} = ${v}`).toBe(f.topologyKey(base));
+        }
+      }
+    }
+  });
   it('fills defaults, keeps extra names, derives rise from slope', () => {
     const f = getFamily('scissors')!;
     const p = withDefaults(f, { span: 10, slope: 45, extra: 1 });

@@ -57,6 +57,8 @@ export interface TrussFamily {
   check(p: Params): string[];
   /** Key of everything that changes the joints/members/supports: same key, same topology. */
   topologyKey(p: Params): string;
+  /** The parameters `topologyKey` reads: variants equal in all of them share a topology (a sweep skips the key then). */
+  readonly topologyParams: readonly string[];
   /** Build the topology (once per key; the caller caches it). Joints are numbered along the span. */
   topology(p: Params): FamilyTopology;
   /** Fill joint coordinates, metres, into x and y (length = joints). Allocates nothing. */

@@ -59,6 +59,9 @@ interface TopoEntry {
 /** Evaluates variants of one study; one per worker thread. */
 export class VariantEvaluator {
   private readonly topos = new Map<string, TopoEntry>();
+  /** The topology of the last variant and the values of the parameters that decided it. */
+  private lastTopo: TopoEntry | undefined;
+  private readonly lastTopoValues: Params[string][] = [];
   private readonly scratch: Params = {};
   private readonly ids: VariantIdHasher;
   readonly record: VariantRecord = {
@@ -117,6 +120,19 @@ export class VariantEvaluator {
   }
 
   private entry(p: Params): TopoEntry {
+    // Most variants share the previous one's topology: compare the few parameters that decide it
+    // before building the key.
+    const names = this.setup.family.topologyParams, seen = this.lastTopoValues;
+    let same = this.lastTopo !== undefined;
+    for (let i = 0; same && i < names.length; i++) same = p[names[i]] === seen[i];
+    if (same) return this.lastTopo!;
+    const t = this.entryFor(p);
+    for (let i = 0; i < names.length; i++) seen[i] = p[names[i]];
+    this.lastTopo = t;
+    return t;
+  }
+
+  private entryFor(p: Params): TopoEntry {
     const key = this.setup.family.topologyKey(p);
     let t = this.topos.get(key);
     if (!t) {
