@@ -46,8 +46,13 @@ export interface Kernel {
   run(x: Readonly<Float64Array>, y: Readonly<Float64Array>, EA: Readonly<Float64Array>, loads: Readonly<Float64Array>, combos: number): number;
 }
 
-/** Build the kernel for one topology. @param maxCombos - combinations solved per run at most */
-export function createKernel(topo: Topology, maxCombos: number): Kernel {
+/**
+ * Build the kernel for one topology.
+ * @param maxCombos - combinations solved per run at most
+ * @param opts.reactions - compute support reactions (default true; a sweep records none and skips them)
+ */
+export function createKernel(topo: Topology, maxCombos: number, opts: { reactions?: boolean } = {}): Kernel {
+  const withReactions = opts.reactions ?? true;
   const nJ = topo.nodeIds.length;
   const nM = topo.from.length;
   const { from, to, supports } = topo;
@@ -125,7 +130,7 @@ export function createKernel(topo: Topology, maxCombos: number): Kernel {
     if (supportOf[to[e]] >= 0) sm.push(e, supportOf[to[e]], -1);
   }
   const supportMembers = Int32Array.from(sm);
-  const p: Plan = { nJ, nM, ns, nFree, bw, W, from, to, slotDof, slotDir, supportOf, supports, shape, band, diag, d, invD, rhs, cosT, sinT, stiff, length, forces, disp, react, offsets, ends, supportMembers };
+  const p: Plan = { nJ, nM, ns, nFree, bw, W, from, to, slotDof, slotDir, supportOf, supports, shape, band, diag, d, invD, rhs, cosT, sinT, stiff, length, forces, disp, react, offsets, ends, supportMembers, withReactions };
   const kernel: Kernel = {
     nJoints: nJ, nMembers: nM, nReactions, nFree, shape, k: 0, s: 0, status: STATUS_UNSTABLE,
     forces, disp, react, length,
@@ -157,6 +162,7 @@ interface Plan {
   offsets: Int32Array; ends: Float64Array;
   /** Triples (member, support index, +1 at the member's start joint / −1 at its end joint). */
   supportMembers: Int32Array;
+  withReactions: boolean;
 }
 
 function assemble(p: Plan, x: Readonly<Float64Array>, y: Readonly<Float64Array>, EA: Readonly<Float64Array>): void {
@@ -199,44 +205,47 @@ function assemble(p: Plan, x: Readonly<Float64Array>, y: Readonly<Float64Array>,
 }
 
 function solveAll(p: Plan, combos: number, loads: Readonly<Float64Array>): void {
-  const { nJ, slotDof, slotDir, shape, band, invD, rhs } = p;
+  const { nJ, nM, from, to, slotDof, slotDir, shape, band, invD, rhs, cosT, sinT, stiff, forces, disp } = p;
   if (combos === 0) return;
+  const n2 = 2 * nJ;
   // All right-hand sides at once, interleaved: rhs[dof · combos + c].
-  for (let c = 0; c < combos; c++) {
-    const lo = c * 2 * nJ;
-    for (let i = 0; i < nJ; i++) {
-      const fx = loads[lo + 2 * i];
-      const fy = loads[lo + 2 * i + 1];
-      const d0 = slotDof[2 * i];
-      const d1 = slotDof[2 * i + 1];
-      if (d0 >= 0) rhs[d0 * combos + c] = fx * slotDir[4 * i] + fy * slotDir[4 * i + 1];
-      if (d1 >= 0) rhs[d1 * combos + c] = fx * slotDir[4 * i + 2] + fy * slotDir[4 * i + 3];
+  for (let i = 0; i < nJ; i++) {
+    const d0 = slotDof[2 * i], d1 = slotDof[2 * i + 1];
+    const ax = slotDir[4 * i], ay = slotDir[4 * i + 1], bx = slotDir[4 * i + 2], by = slotDir[4 * i + 3];
+    for (let c = 0, lo = 0; c < combos; c++, lo += n2) {
+      const fx = loads[lo + 2 * i], fy = loads[lo + 2 * i + 1];
+      if (d0 >= 0) rhs[d0 * combos + c] = fx * ax + fy * ay;
+      if (d1 >= 0) rhs[d1 * combos + c] = fx * bx + fy * by;
     }
   }
   solveBandLdltMulti(shape, band, invD, rhs, combos);
-  for (let c = 0; c < combos; c++) finishCombination(p, c, combos, loads);
+  // Joint displacements from the dof values, every combination per joint.
+  for (let i = 0; i < nJ; i++) {
+    const d0 = slotDof[2 * i], d1 = slotDof[2 * i + 1];
+    const ax = slotDir[4 * i], ay = slotDir[4 * i + 1], bx = slotDir[4 * i + 2], by = slotDir[4 * i + 3];
+    for (let c = 0, lo = 0; c < combos; c++, lo += n2) {
+      const u0 = d0 >= 0 ? rhs[d0 * combos + c] : 0;
+      const u1 = d1 >= 0 ? rhs[d1 * combos + c] : 0;
+      disp[lo + 2 * i] = u0 * ax + u1 * bx;
+      disp[lo + 2 * i + 1] = u0 * ay + u1 * by;
+    }
+  }
+  // Member forces N = EA/L · e·(u_b − u_a), every combination per member.
+  for (let e = 0; e < nM; e++) {
+    const a2 = 2 * from[e], b2 = 2 * to[e];
+    const k = stiff[e], ce = cosT[e], se = sinT[e];
+    for (let c = 0, lo = 0; c < combos; c++, lo += n2) {
+      forces[c * nM + e] = k * (ce * (disp[lo + b2] - disp[lo + a2]) + se * (disp[lo + b2 + 1] - disp[lo + a2 + 1]));
+    }
+  }
+  if (p.withReactions) for (let c = 0; c < combos; c++) reactions(p, c, loads);
 }
 
-function finishCombination(p: Plan, cmb: number, combos: number, loads: Readonly<Float64Array>): void {
-  const { nJ, nM, ns, from, to, slotDof, slotDir, supports, rhs, cosT, sinT, stiff, forces, disp, react } = p;
+/** Reactions of combination `cmb`: load + member forces + reaction = 0 at each supported joint. */
+function reactions(p: Plan, cmb: number, loads: Readonly<Float64Array>): void {
+  const { nJ, nM, ns, supports, cosT, sinT, forces, react } = p;
   const lo = cmb * 2 * nJ;
-  for (let i = 0; i < nJ; i++) {
-    const d0 = slotDof[2 * i];
-    const d1 = slotDof[2 * i + 1];
-    const u0 = d0 >= 0 ? rhs[d0 * combos + cmb] : 0;
-    const u1 = d1 >= 0 ? rhs[d1 * combos + cmb] : 0;
-    disp[lo + 2 * i] = u0 * slotDir[4 * i] + u1 * slotDir[4 * i + 2];
-    disp[lo + 2 * i + 1] = u0 * slotDir[4 * i + 1] + u1 * slotDir[4 * i + 3];
-  }
   const fo = cmb * nM;
-  for (let e = 0; e < nM; e++) {
-    const a = from[e];
-    const b = to[e];
-    const du = disp[lo + 2 * b] - disp[lo + 2 * a];
-    const dv = disp[lo + 2 * b + 1] - disp[lo + 2 * a + 1];
-    forces[fo + e] = stiff[e] * (cosT[e] * du + sinT[e] * dv);
-  }
-  // Reactions: load + member forces + reaction = 0 at each supported joint.
   const ro = cmb * 2 * ns;
   for (let q = 0; q < ns; q++) {
     const i = supports[q].node;

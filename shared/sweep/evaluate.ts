@@ -142,7 +142,7 @@ export class VariantEvaluator {
       const nC = Math.max(1, this.setup.combinations.length);
       const { A, E } = this.setup.section;
       t = {
-        topo, kernel: createKernel(topo, nC), x: new Float64Array(nJ), y: new Float64Array(nJ),
+        topo, kernel: createKernel(topo, nC, { reactions: false }), x: new Float64Array(nJ), y: new Float64Array(nJ),
         EA: new Float64Array(nM).fill(E * A), area: new Float64Array(nM).fill(A),
         caseBuf: new Float64Array(this.setup.cases.length * 2 * nJ), loads: new Float64Array(nC * 2 * nJ), reasons: new Map(),
       };
