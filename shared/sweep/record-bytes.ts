@@ -97,6 +97,15 @@ export class ByteBuffer {
     for (let i = 0; i < m; i++) b[n++] = bytes[i];
     this.len = n;
   }
+  /** Bytes [from, to) of another buffer (what was just written there, to write it here too). */
+  copyFrom(src: ByteBuffer, from: number): void {
+    const m = src.len - from;
+    this.ensure(m);
+    const b = this.buf, a = src.buf;
+    let n = this.len;
+    for (let i = from; i < src.len; i++) b[n++] = a[i];
+    this.len = n;
+  }
   /** A non-negative integer below 2^53. */
   uint(v: number): void {
     this.ensure(16);
@@ -257,20 +266,27 @@ export class RecordEncoder {
   /** Append one record to both buffers (the bytes of `formatRecord`). */
   write(r: VariantRecord): void {
     const J = this.jsonl, C = this.csv;
-    J.raw(K.index); J.uint(r.index); J.raw(K.id); J.text(r.id); J.raw(K.params);
-    C.uint(r.index); C.byte(44); C.text(r.id);
+    // Each figure is formatted once, into the JSON line, and its bytes copied into the CSV row.
+    J.raw(K.index);
+    let at = J.len;
+    J.uint(r.index);
+    C.copyFrom(J, at);
+    J.raw(K.id);
+    at = J.len;
+    J.text(r.id);
+    C.byte(44); C.copyFrom(J, at);
+    J.raw(K.params);
     const names = this.names;
     for (let i = 0; i < names.length; i++) {
       const t = this.valueText(i, r.params[names[i]]);
       J.raw(this.nameKeys[i]); J.raw(t.json);
       C.byte(44); C.raw(t.csv);
     }
-    J.raw(K.status); J.text(r.status);
-    J.raw(K.joints); J.uint(r.joints); J.raw(K.members); J.uint(r.members); J.raw(K.reactions); J.uint(r.reactions);
-    J.raw(K.k); J.uint(r.k); J.raw(K.s); J.uint(r.s); J.raw(K.critical); J.raw(r.critical ? K.true : K.false);
-    C.byte(44); C.text(r.status);
-    C.byte(44); C.uint(r.joints); C.byte(44); C.uint(r.members); C.byte(44); C.uint(r.reactions);
-    C.byte(44); C.uint(r.k); C.byte(44); C.uint(r.s); C.byte(44); C.raw(r.critical ? K.true : K.false);
+    J.raw(K.status); at = J.len; J.text(r.status); C.byte(44); C.copyFrom(J, at);
+    this.count(K.joints, r.joints); this.count(K.members, r.members); this.count(K.reactions, r.reactions);
+    this.count(K.k, r.k); this.count(K.s, r.s);
+    J.raw(K.critical); J.raw(r.critical ? K.true : K.false);
+    C.byte(44); C.raw(r.critical ? K.true : K.false);
     const stable = r.status === 'determinate' || r.status === 'indeterminate';
     this.peak(K.peakTension, stable, r.peakTension, 6, r.peakTensionMember, r.peakTensionCombination, K.member);
     this.peak(K.peakCompression, stable, r.peakCompression, 6, r.peakCompressionMember, r.peakCompressionCombination, K.member);
@@ -278,8 +294,9 @@ export class RecordEncoder {
     J.raw(K.ratio);
     C.byte(44);
     if (stable && Number.isFinite(r.spanOverDeflection)) {
+      at = J.len;
       J.rounded(r.spanOverDeflection, 3);
-      C.rounded(r.spanOverDeflection, 3);
+      C.copyFrom(J, at);
     } else J.raw(K.null);
     J.raw(K.reason);
     if (r.reason) {
@@ -299,6 +316,16 @@ export class RecordEncoder {
     C.byte(10);
   }
 
+  /** `,"key":n` in the JSON line and `,n` in the CSV row. */
+  private count(key: Uint8Array, n: number): void {
+    const J = this.jsonl;
+    J.raw(key);
+    const at = J.len;
+    J.uint(n);
+    this.csv.byte(44);
+    this.csv.copyFrom(J, at);
+  }
+
   private peak(key: Uint8Array, stable: boolean, v: number, d: 6 | 9, who: string, combo: string, whoKey: Uint8Array): void {
     const J = this.jsonl, C = this.csv;
     J.raw(key);
@@ -310,8 +337,9 @@ export class RecordEncoder {
     J.raw(K.value);
     C.byte(44);
     if (Number.isFinite(v)) {
+      const at = J.len;
       J.rounded(v, d);
-      C.rounded(v, d);
+      C.copyFrom(J, at);
     } else {
       J.raw(K.null);
       C.raw(K.null);
