@@ -37,7 +37,8 @@ export function evaluateBatch(task: SweepTask): SweepBatch {
   if (!cached || cached.hash !== task.studyHash) {
     const r = resolveStudy(task.study, { validated: true }); // the main thread checked these bytes
     if (!r.setup) throw new Error(`study does not resolve in the worker: ${r.issues.map((i) => `${i.path}: ${i.message}`).join('; ')}`);
-    cached = { hash: task.studyHash, evaluator: new VariantEvaluator(r.setup), encoder: new RecordEncoder(r.setup.plan.paramNames, r.setup.design !== undefined) };
+    const evaluator = new VariantEvaluator(r.setup);
+    cached = { hash: task.studyHash, evaluator, encoder: new RecordEncoder(r.setup.plan.paramNames, r.setup.design !== undefined, evaluator.slots, r.setup.plan) };
   }
   const { evaluator: ev, encoder } = cached;
   const names = ev.setup.plan.paramNames;

@@ -11,6 +11,7 @@ import type { Structure } from '../engine/structure';
 import { addCaseLoads } from '../families/loads';
 import { variantAt, passes, type SpacePlan } from './space';
 import { VariantIdHasher } from './variant-id';
+import { ParamSlots } from './param-slots';
 import type { PreparedDesign } from '../design/prepare';
 import { emptyDesign, VariantSizer, type DesignFigures } from './evaluate-design';
 
@@ -64,6 +65,10 @@ export class VariantEvaluator {
   private readonly lastTopoValues: Params[string][] = [];
   private readonly scratch: Params = {};
   private readonly ids: VariantIdHasher;
+  /** The values of the variant being evaluated, by index of `plan.paramNames` (see param-slots.ts). */
+  readonly slots: ParamSlots;
+  /** Index in `plan.paramNames` of each of the family's topology parameters (−1 when not one). */
+  private readonly topoIndex: Int32Array;
   readonly record: VariantRecord = {
     index: 0, id: '', params: {}, status: 'error', joints: 0, members: 0, reactions: 0, k: 0, s: 0, critical: false,
     peakTension: 0, peakTensionMember: '', peakTensionCombination: '', peakCompression: 0, peakCompressionMember: '',
@@ -77,7 +82,9 @@ export class VariantEvaluator {
   private readonly swFactor: Float64Array;
 
   constructor(readonly setup: SweepSetup) {
-    this.ids = new VariantIdHasher(setup.family.id, setup.plan.paramNames);
+    this.slots = new ParamSlots(setup.plan, setup.plan.paramNames);
+    this.ids = new VariantIdHasher(setup.family.id, setup.plan.paramNames, this.slots, setup.plan);
+    this.topoIndex = Int32Array.from(setup.family.topologyParams, (n) => setup.plan.paramNames.indexOf(n));
     const d = setup.design;
     const sized = d !== undefined && d.selfWeight;
     this.caseLoads = sized ? setup.caseLoads.map((ls) => ls.filter((l) => l.kind !== 'self-weight')) : setup.caseLoads;
@@ -94,10 +101,11 @@ export class VariantEvaluator {
     const { plan, family } = this.setup;
     const p = variantAt(plan, index, this.scratch);
     if (!passes(plan, p)) return undefined;
+    this.slots.read(index, p);
     const r = this.record;
     r.index = index;
     r.params = p;
-    r.id = this.ids.id(p);
+    r.id = this.ids.fromSlots(p);
     try {
       const problems = family.check(p);
       if (problems.length) return this.fail(problems.join('; '));
@@ -122,12 +130,12 @@ export class VariantEvaluator {
   private entry(p: Params): TopoEntry {
     // Most variants share the previous one's topology: compare the few parameters that decide it
     // before building the key.
-    const names = this.setup.family.topologyParams, seen = this.lastTopoValues;
+    const at = this.topoIndex, values = this.slots.values, seen = this.lastTopoValues;
     let same = this.lastTopo !== undefined;
-    for (let i = 0; same && i < names.length; i++) same = p[names[i]] === seen[i];
+    for (let i = 0; same && i < at.length; i++) same = (at[i] >= 0 ? values[at[i]] : p[this.setup.family.topologyParams[i]]) === seen[i];
     if (same) return this.lastTopo!;
     const t = this.entryFor(p);
-    for (let i = 0; i < names.length; i++) seen[i] = p[names[i]];
+    for (let i = 0; i < at.length; i++) seen[i] = at[i] >= 0 ? values[at[i]] : p[this.setup.family.topologyParams[i]];
     this.lastTopo = t;
     return t;
   }

@@ -6,6 +6,8 @@
  */
 import type { VariantRecord } from './evaluate';
 import { csvText, formatDesignPart } from './record-format';
+import { ValueCache, type ParamSlots } from './param-slots';
+import type { SpacePlan } from './space';
 
 /** A growable byte buffer, reused from batch to batch. */
 export class ByteBuffer {
@@ -207,6 +209,13 @@ const K = {
 
 /** Cached text of one parameter value: its JSON and CSV forms. */
 interface ValueText { json: Uint8Array; csv: Uint8Array }
+
+function valueTextOf(v: number | string | undefined): ValueText {
+  const json = typeof v === 'number' ? (Number.isFinite(v) ? String(v) : 'null') : JSON.stringify(v);
+  const csv = typeof v === 'number' ? String(v) : csvText(String(v ?? ''));
+  const jb = bytesOf(json);
+  return { json: jb, csv: csv === json ? jb : bytesOf(csv) };
+}
 const VALUES_KEPT = 1 << 16;
 
 /** Writes records of one study into a JSON Lines buffer and a CSV buffer. */
@@ -220,11 +229,19 @@ export class RecordEncoder {
   /** Per parameter, the value written last and its text. */
   private readonly last: ({ value: number | string | undefined; text: ValueText } | undefined)[];
 
-  constructor(paramNames: readonly string[], private readonly design = false) {
+  /** With slots: parameter texts by dimension digit, read for the variant the slots last read. */
+  private readonly bySlot?: ValueCache<ValueText>;
+
+  /**
+   * @param slots - the evaluator's parameter slots (with the plan they were made from): each record
+   *   written must then be the variant they last read, as it is right after `evaluate`
+   */
+  constructor(paramNames: readonly string[], private readonly design = false, slots?: ParamSlots, plan?: SpacePlan) {
     this.names = paramNames;
     this.nameKeys = paramNames.map((n, i) => bytesOf(`${i ? ',' : ''}${JSON.stringify(n)}:`));
     this.values = paramNames.map(() => new Map());
     this.last = paramNames.map(() => undefined);
+    if (slots && plan) this.bySlot = new ValueCache(slots, (_i, v) => valueTextOf(v), plan);
   }
 
   private valueText(i: number, v: number | string | undefined): ValueText {
@@ -241,9 +258,7 @@ export class RecordEncoder {
     const key = v ?? '';
     let t = cache.get(key);
     if (t === undefined) {
-      const json = typeof v === 'number' ? (Number.isFinite(v) ? String(v) : 'null') : JSON.stringify(v);
-      const csv = typeof v === 'number' ? String(v) : csvText(String(v ?? ''));
-      t = { json: bytesOf(json), csv: bytesOf(csv) };
+      t = valueTextOf(v);
       if (cache.size < VALUES_KEPT) cache.set(key, t);
     }
     return t;
@@ -277,8 +292,9 @@ export class RecordEncoder {
     C.byte(44); C.copyFrom(J, at);
     J.raw(K.params);
     const names = this.names;
+    const bySlot = this.bySlot;
     for (let i = 0; i < names.length; i++) {
-      const t = this.valueText(i, r.params[names[i]]);
+      const t = bySlot ? bySlot.get(i) : this.valueText(i, r.params[names[i]]);
       J.raw(this.nameKeys[i]); J.raw(t.json);
       C.byte(44); C.raw(t.csv);
     }

@@ -5,6 +5,8 @@
  */
 import type { Study } from '../schemas/study';
 import type { ParamValue, Params } from './types';
+import { ValueCache, type ParamSlots } from './param-slots';
+import type { SpacePlan } from './space';
 
 /**
  * Canonical text of a number: `Number(x.toPrecision(12)).toString()`; -0 reads 0.
@@ -28,6 +30,10 @@ class Fnv64Ascii {
   h0 = 0x2325; h1 = 0x8422; h2 = 0x9ce4; h3 = 0xcbf2;
   reset(): void {
     this.h0 = 0x2325; this.h1 = 0x8422; this.h2 = 0x9ce4; this.h3 = 0xcbf2;
+  }
+  /** Take the state of another hash (one that has been fed a common prefix). */
+  copy(o: Fnv64Ascii): void {
+    this.h0 = o.h0; this.h1 = o.h1; this.h2 = o.h2; this.h3 = o.h3;
   }
   feed(text: string): void {
     let h0 = this.h0, h1 = this.h1, h2 = this.h2, h3 = this.h3;
@@ -186,6 +192,9 @@ const isAscii = (s: string) => !/[^\x00-\x7f]/.test(s);
 /** Character codes of the hex digits. */
 const HEX = Uint8Array.from('0123456789abcdef', (c) => c.charCodeAt(0));
 
+/** Marks a canonical text that is not ASCII (the fast hash takes ASCII only); never part of a real text. */
+const NOT_ASCII = '\u0000';
+
 /**
  * `variantId` for the variants of one study, fast: the canonical text of each parameter value is
  * kept once seen, and the hash runs over the pieces without joining them. Same ids as `variantId`
@@ -201,8 +210,16 @@ export class VariantIdHasher {
   /** Per key, the value hashed last and its canonical text ('' before the first). */
   private readonly lastValue: ParamValue[];
   private readonly lastText: string[];
+  /** With slots: per key, its parameter index, and the canonical texts by dimension digit. */
+  private readonly keyParam?: Int32Array;
+  private readonly canonical?: ValueCache<string>;
+  /** The hash state after the family's part of the text, which every id starts with. */
+  private readonly afterFamily = new Fnv64Ascii();
 
-  constructor(private readonly family: string, private readonly names: readonly string[]) {
+  /**
+   * @param slots - the evaluator's parameter slots, for `fromSlots` (with the plan they were made from)
+   */
+  constructor(private readonly family: string, private readonly names: readonly string[], private readonly slots?: ParamSlots, plan?: SpacePlan) {
     this.keys = sortedOnce(names);
     this.prefixes = this.keys.map((k) => `;${k}=`);
     this.texts = this.keys.map(() => new Map());
@@ -210,14 +227,21 @@ export class VariantIdHasher {
     this.lastText = this.keys.map(() => '');
     this.start = quoted(family);
     this.ascii = isAscii(this.start) && this.prefixes.every(isAscii);
+    this.afterFamily.feed(this.start);
+    if (slots && plan) {
+      this.keyParam = Int32Array.from(this.keys, (k) => slots.names.indexOf(k));
+      this.canonical = new ValueCache(slots, (_i, v) => {
+        const t = typeof v === 'number' ? canonicalNumber(v) : quoted(v);
+        return isAscii(t) ? t : NOT_ASCII;
+      }, plan);
+    }
   }
 
   /** @returns the id of `params` (16 lowercase hex digits) */
   id(params: Readonly<Params>): string {
     if (!this.ascii) return variantId(this.family, params, this.names);
     const h = this.hash;
-    h.reset();
-    h.feed(this.start);
+    h.copy(this.afterFamily);
     for (let i = 0; i < this.keys.length; i++) {
       const v = params[this.keys[i]];
       let t: string | undefined;
@@ -235,6 +259,24 @@ export class VariantIdHasher {
         this.lastText[i] = t;
       }
       h.feed(this.prefixes[i]);
+      h.feed(t);
+    }
+    return h.hex();
+  }
+
+  /**
+   * The id of the variant the slots last read (same as `id` of its params), reading the values
+   * by index. Needs the slots given to the constructor; `params` is for the non-ASCII fallback.
+   */
+  fromSlots(params: Readonly<Params>): string {
+    const keyParam = this.keyParam, canonical = this.canonical;
+    if (!keyParam || !canonical || !this.ascii) return this.id(params);
+    const h = this.hash;
+    h.copy(this.afterFamily);
+    for (let q = 0; q < keyParam.length; q++) {
+      const t = canonical.get(keyParam[q]);
+      if (t === NOT_ASCII) return variantId(this.family, params, this.names);
+      h.feed(this.prefixes[q]);
       h.feed(t);
     }
     return h.hex();
