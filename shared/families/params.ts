@@ -73,7 +73,8 @@ const NONE: readonly string[] = Object.freeze([]);
 export function checkParams(specs: readonly ParamSpec[], p: Params): string[] {
   // called for every variant of a sweep: nothing is allocated unless something is wrong
   let out: string[] | undefined;
-  for (const s of specs) {
+  for (let i = 0; i < specs.length; i++) {
+    const s = specs[i];
     const v = p[s.name];
     if (v === undefined) continue;
     if (s.options) {

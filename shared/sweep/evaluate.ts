@@ -9,7 +9,7 @@ import { createKernel, STATUS_DETERMINATE, STATUS_UNSTABLE, type Kernel } from '
 import { classify } from '../engine/classify';
 import type { Structure } from '../engine/structure';
 import { addCaseLoads } from '../families/loads';
-import { variantAt, passes, type SpacePlan } from './space';
+import { variantAt, paramsFor, passes, type SpacePlan } from './space';
 import { VariantIdHasher } from './variant-id';
 import { ParamSlots } from './param-slots';
 import type { PreparedDesign } from '../design/prepare';
@@ -63,7 +63,7 @@ export class VariantEvaluator {
   /** The topology of the last variant and the values of the parameters that decided it. */
   private lastTopo: TopoEntry | undefined;
   private readonly lastTopoValues: Params[string][] = [];
-  private readonly scratch: Params = {};
+  private readonly scratch: Params;
   private readonly ids: VariantIdHasher;
   /** The values of the variant being evaluated, by index of `plan.paramNames` (see param-slots.ts). */
   readonly slots: ParamSlots;
@@ -82,6 +82,7 @@ export class VariantEvaluator {
   private readonly swFactor: Float64Array;
 
   constructor(readonly setup: SweepSetup) {
+    this.scratch = paramsFor(setup.plan);
     this.slots = new ParamSlots(setup.plan, setup.plan.paramNames);
     this.ids = new VariantIdHasher(setup.family.id, setup.plan.paramNames, this.slots, setup.plan);
     this.topoIndex = Int32Array.from(setup.family.topologyParams, (n) => setup.plan.paramNames.indexOf(n));

@@ -9,7 +9,7 @@
  */
 import type { Study } from '../schemas/study';
 import { checkCombinations } from './check-combinations';
-import { buildDimensions, type Dimension } from './dimensions';
+import { buildDimensions, tagged, type Dimension } from './dimensions';
 import { compileExpression, type CompiledExpression, type ParsedExpression } from './expressions';
 import { checkExpressions, checkNames, parseAll } from './space-checks';
 import type { Issue, ParamSpec, Params, ParamValue } from './types';
@@ -29,6 +29,9 @@ export interface SpacePlan {
   readonly size: number;
   /** The one scope all expressions are evaluated in; internal, reused between variants. */
   readonly scope: Map<string, unknown>;
+  /** `base` as two arrays, for `fill` (the values tagged: see `tagged` in dimensions.ts). */
+  readonly baseNames: readonly string[];
+  readonly baseValues: readonly ParamValue[];
 }
 
 /**
@@ -70,6 +73,8 @@ export function planSpace(study: Study, params: readonly ParamSpec[]): SpacePlan
     filters: filters.map((e) => compile(e, '')),
     size,
     scope: new Map(Object.entries(base)),
+    baseNames: Object.keys(base),
+    baseValues: tagged(Object.values(base)),
   };
   const trial = size > 0 ? trialIssues(plan) : [];
   return trial.length ? { issues: trial } : plan;
@@ -93,6 +98,20 @@ export function spaceSize(plan: SpacePlan): number {
  */
 export function variantAt(plan: SpacePlan, index: number, out: Params = {}): Params {
   fill(plan, index, out);
+  return out;
+}
+
+/**
+ * A params object to pass to `variantAt` again and again: every name it will fill set up front,
+ * each field holding a string first, so that V8 keeps its fields tagged. Numbers then go in and
+ * out as the boxes the dimension columns already hold, where a field of unboxed doubles would box
+ * each number anew on every read by name (the families read params by name).
+ */
+export function paramsFor(plan: SpacePlan): Params {
+  const out: Params = {};
+  for (const n of plan.baseNames) out[n] = '';
+  for (const d of plan.dimensions) for (const n of d.names) out[n] = '';
+  for (const e of plan.derived) out[e.name] = '';
   return out;
 }
 
@@ -121,12 +140,12 @@ function fill(plan: SpacePlan, index: number, out: Params, issues?: Issue[]): vo
   if (!(Number.isInteger(index) && index >= 0 && index < plan.size)) {
     throw new RangeError(`variant index ${index} is outside 0..${plan.size - 1}`);
   }
-  const { scope, base, dimensions } = plan;
+  const { scope, baseNames, baseValues, dimensions } = plan;
   // The expression scope is read only by derived parameters and filters: most studies have neither.
   const scoped = plan.derived.length > 0 || plan.filters.length > 0;
-  for (const k in base) {
-    out[k] = base[k];
-    if (scoped) scope.set(k, base[k]);
+  for (let i = 0; i < baseNames.length; i++) {
+    out[baseNames[i]] = baseValues[i];
+    if (scoped) scope.set(baseNames[i], baseValues[i]);
   }
   let rest = index;
   for (let d = dimensions.length - 1; d >= 0; d--) {
