@@ -4,7 +4,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import type { StudyLoad } from '../schemas/study-loads';
-import { STEEL_UNIT_WEIGHT, addCaseLoads, unknownJoints } from './loads';
+import { STEEL_UNIT_WEIGHT, addCaseLoads, loadedEntries, unknownJoints } from './loads';
 import { families, getFamily, withDefaults } from './registry';
 import type { Params } from './types';
 
@@ -125,5 +125,32 @@ describe('self-weight and point loads', () => {
     const loads: StudyLoad[] = [{ case: 'P', kind: 'point', joint: 'X9', fy: -1 }, { case: 'P', kind: 'point', joint: 'B1', fy: -1 }];
     expect(() => addCaseLoads(loads, s.t, s.x, s.y, s.area, s.out)).toThrow(/X9/);
     expect(unknownJoints(loads, s.t)).toEqual(['X9']);
+  });
+});
+
+describe('loadedEntries: the only entries addCaseLoads writes', () => {
+  it.each(families.map((f) => [f.id, f] as const))('%s: every nonzero joint load is listed, with the offset applied', (_id, f) => {
+    const p = withDefaults(f, {});
+    const topo = f.topology(p);
+    const nJ = topo.nodeIds.length;
+    const x = new Float64Array(nJ), y = new Float64Array(nJ);
+    f.geometry(p, topo, x, y);
+    const area = new Float64Array(topo.from.length).fill(0.004);
+    const loads: StudyLoad[] = [
+      { case: 'D', kind: 'area', value: 0.6, spacing: 6, chord: 'top' },
+      { case: 'D', kind: 'line', value: 2, chord: 'bottom', projection: 'length' },
+      { case: 'D', kind: 'self-weight' },
+      { case: 'D', kind: 'point', joint: topo.nodeIds[Math.floor(nJ / 2)], fx: 3, fy: -5 },
+    ];
+    for (const subset of [loads, loads.slice(0, 1), loads.slice(2, 3), loads.slice(3)]) {
+      const listed = new Set(loadedEntries(subset, topo));
+      const out = new Float64Array(2 * nJ + 7);
+      addCaseLoads(subset, topo, x, y, area, out, 7);
+      out.forEach((v, i) => {
+        if (i < 7) expect(v).toBe(0); // nothing before the offset
+        else if (v !== 0) expect(listed.has(i - 7), `entry ${i - 7}`).toBe(true);
+      });
+      expect([...listed]).toEqual([...listed].sort((a, b) => a - b));
+    }
   });
 });

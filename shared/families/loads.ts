@@ -73,6 +73,29 @@ export function addCaseLoads(
   }
 }
 
+/**
+ * The entries of a joint-load vector that `addCaseLoads` can write for `loads` on this topology,
+ * ascending: chord joints' fy for area and line loads, member ends' fy for self-weight, both
+ * components at a point load's joint. Every other entry stays zero whatever the geometry, so a
+ * sweep combines the cases over these alone.
+ */
+export function loadedEntries(loads: readonly StudyLoad[], topo: FamilyTopology): Int32Array {
+  const hit = new Uint8Array(2 * topo.nodeIds.length);
+  for (const load of loads) {
+    if (load.kind === 'area' || load.kind === 'line') {
+      for (const j of load.chord === 'top' ? topo.topChord : topo.bottomChord) hit[2 * j + 1] = 1;
+    } else if (load.kind === 'self-weight') {
+      for (let e = 0; e < topo.from.length; e++) hit[2 * topo.from[e] + 1] = hit[2 * topo.to[e] + 1] = 1;
+    } else {
+      const j = topo.nodeIds.indexOf(load.joint);
+      if (j >= 0) hit[2 * j] = hit[2 * j + 1] = 1;
+    }
+  }
+  const out: number[] = [];
+  hit.forEach((h, i) => h && out.push(i));
+  return Int32Array.from(out);
+}
+
 /** Joint ids named by point loads that the topology does not have, in order of appearance. */
 export function unknownJoints(loads: readonly StudyLoad[], topo: FamilyTopology): string[] {
   const known = new Set(topo.nodeIds);

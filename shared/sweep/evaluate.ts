@@ -8,7 +8,7 @@ import type { StudyLoad } from '../schemas/study-loads';
 import { createKernel, STATUS_DETERMINATE, STATUS_UNSTABLE, type Kernel } from '../engine/kernel';
 import { classify } from '../engine/classify';
 import type { Structure } from '../engine/structure';
-import { addCaseLoads } from '../families/loads';
+import { addCaseLoads, loadedEntries } from '../families/loads';
 import { variantAt, paramsFor, passes, type SpacePlan } from './space';
 import { VariantIdHasher } from './variant-id';
 import { ParamSlots } from './param-slots';
@@ -55,6 +55,8 @@ export interface VariantRecord {
 interface TopoEntry {
   topo: FamilyTopology; kernel: Kernel; x: Float64Array; y: Float64Array; EA: Float64Array; area: Float64Array;
   caseBuf: Float64Array; loads: Float64Array; reasons: Map<string, string>; sizer?: VariantSizer;
+  /** The load-vector entries any case can write (`loadedEntries`): the others stay zero. */
+  loaded: Int32Array;
 }
 
 /** Evaluates variants of one study; one per worker thread. */
@@ -119,7 +121,7 @@ export class VariantEvaluator {
 
   private fail(reason: string): VariantRecord {
     const r = this.record;
-    Object.assign(r.design, EMPTY_DESIGN);
+    if (this.setup.design) Object.assign(r.design, EMPTY_DESIGN); // unsized studies never change it
     r.status = 'error';
     r.joints = r.members = r.reactions = r.k = r.s = 0;
     r.critical = false;
@@ -154,6 +156,7 @@ export class VariantEvaluator {
         topo, kernel: createKernel(topo, nC, { reactions: false }), x: new Float64Array(nJ), y: new Float64Array(nJ),
         EA: new Float64Array(nM).fill(E * A), area: new Float64Array(nM).fill(A),
         caseBuf: new Float64Array(this.setup.cases.length * 2 * nJ), loads: new Float64Array(nC * 2 * nJ), reasons: new Map(),
+        loaded: loadedEntries(this.caseLoads.flat(), topo),
       };
       if (this.setup.design) t.sizer = new VariantSizer(this.setup.design, topo, t.kernel, this.swFactor);
       this.topos.set(key, t);
@@ -170,24 +173,27 @@ export class VariantEvaluator {
     const n2 = 2 * nJ;
     const { cases, combinations } = this.setup;
     const caseLoads = this.caseLoads;
-    t.caseBuf.fill(0);
-    for (let c = 0; c < cases.length; c++) addCaseLoads(caseLoads[c], topo, x, y, t.area, t.caseBuf, c * n2);
-    const loads = t.loads, caseBuf = t.caseBuf;
-    loads.fill(0);
+    // Only the loaded entries are ever written, in both arrays: the rest stay zero from the start.
+    const loads = t.loads, caseBuf = t.caseBuf, loaded = t.loaded, nL = loaded.length;
+    for (let c = 0; c < cases.length; c++) {
+      const co = c * n2;
+      for (let k = 0; k < nL; k++) caseBuf[co + loaded[k]] = 0;
+      addCaseLoads(caseLoads[c], topo, x, y, t.area, caseBuf, co);
+    }
     for (let q = 0; q < combinations.length; q++) {
-      const f = combinations[q].factors;
-      for (let c = 0; c < cases.length; c++) {
-        const fac = f[c];
-        if (fac === 0) continue;
-        const lo = q * n2, co = c * n2;
-        for (let i = 0; i < n2; i++) loads[lo + i] += fac * caseBuf[co + i];
+      const f = combinations[q].factors, lo = q * n2;
+      for (let k = 0; k < nL; k++) {
+        const i = loaded[k];
+        let sum = 0;
+        for (let c = 0; c < cases.length; c++) sum += f[c] * caseBuf[c * n2 + i];
+        loads[lo + i] = sum;
       }
     }
     const nC = combinations.length;
     if (t.sizer) {
       t.sizer.size(x, y, t.loads, spanOf(p, t), combinations, r.design);
     } else {
-      r.design.status = '';
+      // r.design stays empty: only the sizer writes it
       kernel.run(x, y, t.EA, t.loads, nC);
     }
     r.joints = nJ;
@@ -199,7 +205,7 @@ export class VariantEvaluator {
     if (kernel.status === STATUS_UNSTABLE) {
       r.status = 'unstable';
       clearPeaks(r);
-      Object.assign(r.design, EMPTY_DESIGN);
+      if (t.sizer) Object.assign(r.design, EMPTY_DESIGN);
       r.reason = this.reasonFor(t, p);
       return;
     }
