@@ -40,9 +40,10 @@ class SlotPool {
   private readonly slots: { jsonl: Uint8Array; csv: Uint8Array }[] = [];
   constructor(count: number, batch: number) {
     // Bytes a variant takes, with room to spare (the benchmark study's lines are about 500 and 250;
-    // sized studies' add about 200 each). A batch that outgrows its slot falls back to copies.
-    const jsonlBytes = batch * 1024 + 65536;
-    const csvBytes = batch * 640 + 65536;
+    // sized studies' add about 200 each). A batch that outgrows its slot falls back to copies, and
+    // slots stay below 8 + 5 MB, so a large --batch cannot make them take gigabytes.
+    const jsonlBytes = Math.min(batch * 1024 + 65536, 8 << 20);
+    const csvBytes = Math.min(batch * 640 + 65536, 5 << 20);
     const memory = new SharedArrayBuffer(count * (jsonlBytes + csvBytes));
     for (let i = 0; i < count; i++) {
       const at = i * (jsonlBytes + csvBytes);
