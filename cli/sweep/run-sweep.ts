@@ -3,6 +3,7 @@ import { availableParallelism } from 'node:os';
 import Piscina from 'piscina';
 import { mergeSummary, type SweepSummary } from '../../shared/sweep/summary';
 import type { SweepBatch, SweepTask } from '../worker/sweep-task';
+import { slotViews, type SweepSlots } from '../worker/slots';
 import type { ResultWriter } from './run-dir';
 import type { Progress } from './progress';
 
@@ -34,40 +35,48 @@ export function defaultBatch(count: number, workers: number): number {
   return Math.max(16, Math.min(2000, Math.ceil(count / (workers * 16))));
 }
 
-/** Shared-memory slots that batches write their bytes into (see `SweepTask.into`). */
+/** Shared-memory slots that batches write their bytes into (see `SweepTask.slot`). */
 class SlotPool {
   private readonly free: number[] = [];
-  private readonly slots: { jsonl: Uint8Array; csv: Uint8Array }[] = [];
+  private readonly views: { jsonl: Uint8Array; csv: Uint8Array }[] = [];
+  readonly shared: SweepSlots;
   constructor(count: number, batch: number) {
     // Bytes a variant takes, with room to spare (the benchmark study's lines are about 500 and 250;
     // sized studies' add about 200 each). A batch that outgrows its slot falls back to copies, and
     // slots stay below 8 + 5 MB, so a large --batch cannot make them take gigabytes.
     const jsonlBytes = Math.min(batch * 1024 + 65536, 8 << 20);
     const csvBytes = Math.min(batch * 640 + 65536, 5 << 20);
-    const memory = new SharedArrayBuffer(count * (jsonlBytes + csvBytes));
+    this.shared = { memory: new SharedArrayBuffer(count * (jsonlBytes + csvBytes)), jsonlBytes, csvBytes };
     for (let i = 0; i < count; i++) {
-      const at = i * (jsonlBytes + csvBytes);
-      this.slots.push({ jsonl: new Uint8Array(memory, at, jsonlBytes), csv: new Uint8Array(memory, at + jsonlBytes, csvBytes) });
+      this.views.push(slotViews(this.shared, i));
       this.free.push(i);
     }
   }
   get available(): boolean { return this.free.length > 0; }
   take(): number { return this.free.pop()!; }
-  slot(i: number): { jsonl: Uint8Array; csv: Uint8Array } { return this.slots[i]; }
+  /** The batch's bytes: in slot `i` (lengths) or copies. */
+  bytes(i: number, b: SweepBatch): { jsonl: Uint8Array; csv: Uint8Array } {
+    const v = this.views[i];
+    return {
+      jsonl: typeof b.jsonl === 'number' ? v.jsonl.subarray(0, b.jsonl) : b.jsonl,
+      csv: typeof b.csv === 'number' ? v.csv.subarray(0, b.csv) : b.csv,
+    };
+  }
   give(i: number): void { this.free.push(i); }
 }
 
 /** Run [start, end). @returns the next index not on disk (end unless stopped) */
 export async function driveSweep(d: SweepDrive): Promise<number> {
+  // Two batches per worker under way, and room for as many finished ones waiting their turn to be written.
+  const maxInflight = 2 * d.workers;
+  const slots = new SlotPool(2 * maxInflight, d.batch);
   const pool = new Piscina<SweepTask, SweepBatch>({ filename: workerFile, minThreads: d.workers, maxThreads: d.workers, idleTimeout: 500, concurrentTasksPerWorker: 1,
+    workerData: { sweepSlots: slots.shared },
     // Bounded heaps keep a million-variant sweep well under 500 MB resident: batches are short-lived.
     // The young generation is the larger share on purpose: a variant leaves ≈ 300 bytes of garbage,
     // and with 16 MB a million variants took 137 scavenges and ≈ 0.7 s of CPU, with 64 MB 69 and
     // ≈ 0.23 s (2 workers, bench study; ≈ 90 MB more resident for the two).
     resourceLimits: { maxOldGenerationSizeMb: 96, maxYoungGenerationSizeMb: 64 } });
-  // Two batches per worker under way, and room for as many finished ones waiting their turn to be written.
-  const maxInflight = 2 * d.workers;
-  const slots = new SlotPool(2 * maxInflight, d.batch);
   const pending = new Map<number, { b: SweepBatch; slot: number }>();
   const inflight = new Set<Promise<void>>();
   let next = d.start;
@@ -77,7 +86,8 @@ export async function driveSweep(d: SweepDrive): Promise<number> {
     for (let p = pending.get(writeAt); p; p = pending.get(writeAt)) {
       const { b, slot } = p;
       pending.delete(writeAt);
-      d.writer.append(b.jsonl, b.csv);
+      const { jsonl, csv } = slots.bytes(slot, b);
+      d.writer.append(jsonl, csv);
       slots.give(slot); // written: its bytes may now be overwritten
       mergeSummary(d.summary, b.summary);
       writeAt = b.end;
@@ -91,7 +101,7 @@ export async function driveSweep(d: SweepDrive): Promise<number> {
       const end = Math.min(d.end, start + d.batch);
       next = end;
       const slot = slots.take();
-      const p: Promise<void> = pool.run({ ...d.task, start, end, into: slots.slot(slot) }).then(
+      const p: Promise<void> = pool.run({ ...d.task, start, end, slot }).then(
         (b) => { pending.set(start, { b, slot }); flush(); },
         (e: unknown) => { failure ??= e; },
       ).finally(() => inflight.delete(p));

@@ -1,6 +1,8 @@
 // One batch of a sweep in a worker thread: evaluate variants [start, end) and return their
 // JSON Lines and CSV rows as UTF-8 bytes (written straight into reused buffers) with the batch's summary. The resolved study is cached per study hash.
+import { workerData } from 'node:worker_threads';
 import { resolveStudy } from '../../shared/sweep/resolve-study';
+import { slotViews, type SweepSlots } from './slots';
 import { VariantEvaluator } from '../../shared/sweep/evaluate';
 import { storedFigures } from '../../shared/sweep/record-format';
 import { RecordEncoder } from '../../shared/sweep/record-bytes';
@@ -14,19 +16,27 @@ export interface SweepTask {
   start: number;
   end: number;
   /**
-   * Where to write the batch's bytes: a slot of memory shared with the main thread, which writes
-   * them to disk and hands the slot to a later batch. The batch then returns views of it, so its
-   * bytes cross no thread by copy. A batch that outgrows its slot returns copies instead.
+   * Where to write the batch's bytes: a slot of the memory shared with the main thread (given once
+   * to each worker as `workerData.sweepSlots`), which writes them to disk and hands the slot to a
+   * later batch. The batch then returns only lengths, so its bytes cross no thread by copy. A batch
+   * that outgrows its slot returns copies instead.
    */
-  into?: { jsonl: Uint8Array; csv: Uint8Array };
+  slot?: number;
 }
+
+// Sent once per worker: a SharedArrayBuffer sent with every task would arrive as a new buffer
+// object each time, each reporting the whole memory to the garbage collector as external.
+const shared = (workerData as { sweepSlots?: SweepSlots } | null)?.sweepSlots;
+const views: { jsonl: Uint8Array; csv: Uint8Array }[] = [];
 
 /** What a batch returns. */
 export interface SweepBatch {
   start: number;
   end: number;
-  jsonl: Uint8Array;
-  csv: Uint8Array;
+  /** The batch's JSON Lines: their length in the task's slot, or the bytes themselves. */
+  jsonl: number | Uint8Array;
+  /** The batch's CSV rows, the same way. */
+  csv: number | Uint8Array;
   summary: SweepSummary;
 }
 
@@ -44,8 +54,9 @@ export function evaluateBatch(task: SweepTask): SweepBatch {
   const names = ev.setup.plan.paramNames;
   const summary = emptySummary(task.objective);
   const figures = {} as SummaryInput;
-  encoder.jsonl.writeInto(task.into?.jsonl);
-  encoder.csv.writeInto(task.into?.csv);
+  const into = shared && task.slot !== undefined ? (views[task.slot] ??= slotViews(shared, task.slot)) : undefined;
+  encoder.jsonl.writeInto(into?.jsonl);
+  encoder.csv.writeInto(into?.csv);
   for (let i = task.start; i < task.end; i++) {
     const rec = ev.evaluate(i);
     if (!rec) {
@@ -55,10 +66,13 @@ export function evaluateBatch(task: SweepTask): SweepBatch {
     encoder.write(rec);
     addToSummary(summary, storedFigures(rec, names, figures), names);
   }
-  return { start: task.start, end: task.end, jsonl: encoder.jsonl.finish(), csv: encoder.csv.finish(), summary };
+  const jsonl = encoder.jsonl.finish(), csv = encoder.csv.finish();
+  // a view of the slot goes back as its length; bytes that outgrew it as themselves
+  const inSlot = (b: Uint8Array) => b.buffer === shared?.memory;
+  return { start: task.start, end: task.end, jsonl: inSlot(jsonl) ? jsonl.length : jsonl, csv: inSlot(csv) ? csv.length : csv, summary };
 }
 
-/** Piscina entry (bytes in a shared slot cross as views; copies otherwise, by structured clone). */
+/** Piscina entry (bytes in a shared slot cross as lengths; copies otherwise, by structured clone). */
 export default function runBatch(task: SweepTask): SweepBatch {
   return evaluateBatch(task);
 }
