@@ -24,7 +24,7 @@ import { Run } from '../server/db/models/run.model';
 import { Variant } from '../server/db/models/variant.model';
 import { createSequelize } from '../server/db/sequelize';
 import { createLogger } from '../server/services/logger';
-import { variantInserter } from '../server/services/runs-insert';
+import { rowValues, variantInserter } from '../server/services/runs-insert';
 import { rowsOfLine, type VariantRow } from '../server/services/runs-push-rows';
 import { createAccount } from '../server/services/users.service';
 import { filterConditions, orderSql, QueryReader, readSort } from '../server/services/variants-query';
@@ -63,6 +63,16 @@ function push(dir: string, server: string, token: string, slug: string): Promise
   p.stdout.on('data', (d: Buffer) => (out += d));
   p.stderr.on('data', (d: Buffer) => (err += d));
   return new Promise((done, fail) => p.on('close', (code) => (code === 0 ? done({ seconds: (performance.now() - t0) / 1000, answer: JSON.parse(out) }) : fail(new Error(`push exited ${code}: ${err}`)))));
+}
+
+const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
+
+/** Seconds from spawn to exit of the CLI with `args`. */
+function cliSeconds(args: string[]): number {
+  const t0 = performance.now();
+  const r = spawnSync(process.execPath, ['cli/bin/panelpoint.mjs', ...args], { cwd: root, stdio: 'ignore' });
+  if (r.status !== 0) throw new Error(`panelpoint ${args.join(' ')} exited ${r.status}`);
+  return (performance.now() - t0) / 1000;
 }
 
 /** GET `path` `n` times: the first (cold) and the median of the others, ms. */
@@ -160,9 +170,12 @@ async function measure(port: number): Promise<Record<string, unknown>> {
     const { variants, jsonl, bytes } = jsonlHead(join(first, 'variants.jsonl'), SAMPLE);
     log(`  sweep: ${int(variants)} variants in ${((performance.now() - t0) / 1000).toFixed(1)} s, variants.jsonl ${(bytes / 1e6).toFixed(0)} MB`);
 
+    const load1 = loadavg()[0];
     const p1 = await push(first, server, token, project.slug);
     const pushRate = variants / p1.seconds;
-    log(`  push 1: ${int(p1.answer.inserted)} variants in ${p1.seconds.toFixed(2)} s (CLI start to exit) = ${int(pushRate)} variants/s`);
+    // What every CLI command pays before its own work (Node, the bundle check, loading the bundle).
+    const cliStart = median([0, 1, 2].map(() => cliSeconds(['--version'])));
+    log(`  push 1: ${int(p1.answer.inserted)} variants in ${p1.seconds.toFixed(2)} s (CLI start to exit) = ${int(pushRate)} variants/s; of which CLI start-up ≈ ${cliStart.toFixed(2)} s (panelpoint --version)`);
 
     // Row by row: the same rows, one INSERT each, in one transaction on a scratch run.
     const scratchRun = await Run.create({ runId: randomUUID(), projectId: project.id, studyId: (await Run.findOne())!.studyId, pushedBy: user.id, cliVersion: 'bench', gitCommit: null, shards: [], status: 'bench', summary: null, paramColumns: { depth: 'p2' } });
@@ -171,15 +184,20 @@ async function measure(port: number): Promise<Record<string, unknown>> {
     for (let i = 0; i < SAMPLE; i += 2000) sample.push(...rowsOfLine({ kind: 'variants', rows: jsonl.slice(i, Math.min(i + 2000, SAMPLE)).map((l) => JSON.parse(l)) }, 1, ctx, -1).rows);
     const oneByOne = (t: Transaction) => ([r]: VariantRow[]) => Variant.create(r, { transaction: t });
     const bulkCreate = (t: Transaction) => (rows: VariantRow[]) => Variant.bulkCreate(rows, { transaction: t, validate: false, hooks: false });
+    // The push's insert, from row objects (the push itself reads most lines straight into values).
+    const pushInsert = (t: Transaction) => {
+      const insert = variantInserter(t);
+      return (rows: VariantRow[]) => insert(rows.map(rowValues));
+    };
     // Warm-up (JIT, statement caches) of each way on a slice, untimed.
-    for (const [make, per] of [[oneByOne, 1], [bulkCreate, 2000], [variantInserter, 2000]] as const) await rate(sequelize, sample.slice(0, 2000), make, per);
+    for (const [make, per] of [[oneByOne, 1], [bulkCreate, 2000], [pushInsert, 2000]] as const) await rate(sequelize, sample.slice(0, 2000), make, per);
     const rowRate = await rate(sequelize, sample, oneByOne, 1);
     const t1 = performance.now();
     for (const r of sample) await Variant.create(r); // each committed on its own, as a plain loop would
     const autoRate = SAMPLE / ((performance.now() - t1) / 1000);
     await Variant.destroy({ where: { runPk: scratchRun.id } });
     const bulkRate = await rate(sequelize, sample, bulkCreate);
-    const inserterRate = await rate(sequelize, sample, variantInserter);
+    const inserterRate = await rate(sequelize, sample, pushInsert);
     await scratchRun.destroy();
     log(`  row by row (the baseline): ${int(rowRate)} variants/s = Variant.create × ${int(SAMPLE)}, one single-row INSERT per variant of the same rows, same table and indexes, in one transaction; ${int(autoRate)} variants/s (each committed)`);
     log(`  the same ${int(SAMPLE)} in batches of 2,000: ${int(inserterRate)} variants/s (the push's insert), ${int(bulkRate)} variants/s (Variant.bulkCreate)`);
@@ -197,7 +215,7 @@ async function measure(port: number): Promise<Record<string, unknown>> {
       more.push((await push(dir, server, token, project.slug)).seconds);
     }
     const total = await Variant.count();
-    const laterRate = variants / [...more].sort((a, b) => a - b)[Math.floor(more.length / 2)];
+    const laterRate = variants / median(more);
     log(`  pushes 2..${RUNS} (the table growing to 1,000,000): ${more.map((s) => s.toFixed(2)).join(', ')} s, median ${int(laterRate)} variants/s = ${(laterRate / rowRate).toFixed(1)}× row by row; variants in the table: ${int(total)}`);
 
     const target = (await Run.findAll({ order: [['id', 'ASC']] }))[2];
@@ -217,7 +235,7 @@ async function measure(port: number): Promise<Record<string, unknown>> {
       ratioPushToRowByRow: Number((pushRate / rowRate).toFixed(1)), ratioInsertToRowByRow: Number((inserterRate / rowRate).toFixed(1)),
       morePushSeconds: more.map((s) => Number(s.toFixed(3))), laterPushPerSecond: Math.round(laterRate), ratioLaterPushToRowByRow: Number((laterRate / rowRate).toFixed(1)), tableVariants: total, pageColdMs: Math.round(page.coldMs), pageMedianMs: Math.round(page.medianMs),
       pageIndex: plan[0]?.key ?? null, aggregateColdMs: Math.round(agg.coldMs), aggregateMedianMs: Math.round(agg.medianMs), pointsMedianMs: Math.round(points.medianMs),
-      bufferPoolMB: Number(pool) / 2 ** 20, cores: cpus().length,
+      bufferPoolMB: Number(pool) / 2 ** 20, cores: cpus().length, cliStartSeconds: Number(cliStart.toFixed(3)), loadAverageBeforePush: Number(load1.toFixed(2)),
     };
   } finally {
     await new Promise((done) => listener.close(done));

@@ -1,7 +1,6 @@
 // HTTP to the team server: JSON requests, and one streamed upload whose bytes are counted as they
 // go. A connection that fails before an answer is a RemoteUnreachable (worth a retry); an answer,
 // whatever its status, is returned as it is.
-import { once } from 'node:events';
 import http, { type IncomingMessage } from 'node:http';
 import https from 'node:https';
 
@@ -52,11 +51,28 @@ export async function requestJson(method: string, url: string, token?: string, b
 export async function postStream(url: string, token: string | undefined, contentType: string, chunks: () => AsyncIterable<Buffer>, sent: (bytes: number) => void): Promise<Answer> {
   return send(url, 'POST', headers(token, { 'content-type': contentType }), async (req, answered) => {
     for await (const chunk of chunks()) {
-      if (answered()) return;
-      if (!req.write(chunk)) await Promise.race([once(req, 'drain'), once(req, 'close')]);
+      if (answered() || req.destroyed) return;
+      if (!req.write(chunk)) await drainedOrClosed(req);
       sent(chunk.length);
     }
     req.end();
+  });
+}
+
+/**
+ * Wait until the request can take more, or is gone. Both listeners go once either fires: a push
+ * waits for 'drain' about a hundred times, and listeners left behind by each wait (events.once)
+ * piled up to a MaxListenersExceededWarning.
+ */
+function drainedOrClosed(req: http.ClientRequest): Promise<void> {
+  return new Promise((done) => {
+    const go = () => {
+      req.off('drain', go);
+      req.off('close', go);
+      done();
+    };
+    req.on('drain', go);
+    req.on('close', go);
   });
 }
 

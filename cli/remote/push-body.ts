@@ -22,35 +22,57 @@ export interface RunLine {
 
 /**
  * The chunks of one push. Only complete lines of the JSONL are sent (a sweep appends whole lines;
- * a torn last line is left out, and the server then refuses the count).
+ * a torn last line is left out, and the server then refuses the count). The lines are never copied
+ * one by one: in each chunk read from the file the newline after a line becomes the comma before
+ * the next, so a run of lines goes out as one slice of that chunk (the chunk is this function's
+ * own buffer). Blank lines are skipped and a CR before the newline dropped.
  * @param rowsPerLine - records per `variants` line
+ * @param chunkBytes - bytes read from the file at a time
  */
-export async function* pushChunks(run: RunLine, jsonlPath: string, rowsPerLine = ROWS_PER_LINE): AsyncGenerator<Buffer> {
+export async function* pushChunks(run: RunLine, jsonlPath: string, rowsPerLine = ROWS_PER_LINE, chunkBytes = 1 << 20): AsyncGenerator<Buffer> {
   yield Buffer.from(JSON.stringify(run) + '\n');
-  let batch: Buffer[] = [OPEN];
+  let parts: Buffer[] = [OPEN];
   let rows = 0;
   let carry: Buffer | undefined;
+  /** Add `n` lines already joined by commas. */
+  const add = (lines: Buffer, n: number) => {
+    if (rows) parts.push(COMMA);
+    parts.push(lines);
+    rows += n;
+  };
   const flush = () => {
-    batch.push(CLOSE);
-    const out = Buffer.concat(batch);
-    batch = [OPEN];
+    parts.push(CLOSE);
+    const out = Buffer.concat(parts);
+    parts = [OPEN];
     rows = 0;
     return out;
   };
-  for await (const raw of createReadStream(jsonlPath, { highWaterMark: 1 << 20 })) {
+  for await (const raw of createReadStream(jsonlPath, { highWaterMark: chunkBytes })) {
     const chunk = carry ? Buffer.concat([carry, raw as Buffer]) : (raw as Buffer);
-    let from = 0;
-    for (let nl = chunk.indexOf(10); nl >= 0; nl = chunk.indexOf(10, from)) {
-      let end = nl;
-      if (end > from && chunk[end - 1] === 13) end--;
-      if (end > from) {
-        if (rows) batch.push(COMMA);
-        batch.push(chunk.subarray(from, end));
-        if (++rows === rowsPerLine) yield flush();
+    let from = 0; // first byte of the lines not yet added
+    let at = 0; // first byte of the next line
+    let joined = 0; // lines in chunk[from, at), each newline turned into a comma
+    for (let nl = chunk.indexOf(10, at); nl >= 0; nl = chunk.indexOf(10, at)) {
+      if (nl > at && chunk[nl - 1] !== 13) {
+        chunk[nl] = 0x2c;
+        joined++;
+      } else {
+        // A blank line, or one ending in CR: add the lines before it, then this one on its own.
+        if (joined) add(chunk.subarray(from, at - 1), joined);
+        if (nl - 1 > at) add(chunk.subarray(at, nl - 1), 1);
+        joined = 0;
+        from = nl + 1;
       }
-      from = nl + 1;
+      at = nl + 1;
+      if (rows + joined === rowsPerLine) {
+        if (joined) add(chunk.subarray(from, at - 1), joined);
+        joined = 0;
+        from = at;
+        yield flush();
+      }
     }
-    carry = from < chunk.length ? Buffer.from(chunk.subarray(from)) : undefined;
+    if (joined) add(chunk.subarray(from, at - 1), joined);
+    carry = at < chunk.length ? Buffer.from(chunk.subarray(at)) : undefined;
   }
   if (rows) yield flush();
 }

@@ -2,6 +2,7 @@ import { getRun, getRuns, postRun } from '../controllers/runs.controller';
 import { ApiRouter } from '../http/api-router';
 import { authenticate } from '../middleware/authenticate';
 import { requireRight } from '../middleware/require-right';
+import { compilePushValidators } from '../services/runs-push-header';
 
 const PUSH = 'Body: application/x-ndjson, streamed (no size limit): a line {"kind":"run",manifest,summary,study:{name,family,hash,body},cliVersion,gitCommit}, '
   + 'then lines {"kind":"variants","rows":[...]} of up to 2,000 variants.jsonl records. One transaction: any error stores nothing. '
@@ -9,6 +10,7 @@ const PUSH = 'Body: application/x-ndjson, streamed (no size limit): a line {"kin
   + '201 for a new run; 200 when a shard joins or extends it; 200 {unchanged:true} when nothing is new.';
 
 export function runsRoutes(): ApiRouter {
+  compilePushValidators();
   return new ApiRouter('runs')
     .post('/projects/:slug/runs', { summary: 'Push a run, or one shard of it (panelpoint push)', description: PUSH, status: 201 },
       authenticate, requireRight('runs:push'), postRun)

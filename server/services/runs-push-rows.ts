@@ -17,7 +17,8 @@ const checkLine = compileSchema(VariantsLine);
 const checkRecord = compileSchema(VariantRecordLine);
 /** Most problems listed in one error answer. */
 const MAX_DETAILS = 20;
-const REASON_LENGTH = 500;
+/** Longest reason stored (the column is VARCHAR(500)). */
+export const REASON_LENGTH = 500;
 
 /**
  * Map the first six numeric parameters, in paramNames order, onto p1..p6.

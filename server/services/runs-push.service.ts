@@ -1,6 +1,8 @@
 /**
  * A push: the NDJSON body read line by line as it arrives, the variants of each line inserted as
- * one batch (runs-insert.ts), all inside one transaction: any failure rolls everything back.
+ * one batch (runs-insert.ts), all inside one transaction: any failure rolls everything back. A line
+ * in the CLI's layout is read from its bytes straight into insert values (runs-push-fast.ts); any
+ * other goes through JSON.parse and the record schema (runs-push-rows.ts), which also word the errors.
  * Pushing a shard the run already holds changes nothing; a resumed shard adds only the variants that follow what is
  * stored; a new shard of the same study and shard count joins the same run.
  */
@@ -12,7 +14,8 @@ import type { ProjectAccess } from '../http/context';
 import { conflict, HttpError } from '../http/http-error';
 import { audit } from './audit.service';
 import { checkHeader, type PushHeader } from './runs-push-header';
-import { variantInserter } from './runs-insert';
+import { rowValues, variantInserter } from './runs-insert';
+import { fastLineReader, type LineValues } from './runs-push-fast';
 import { paramColumnsFor, rowsOfLine, type RowContext } from './runs-push-rows';
 import { mergedSummary, publicShards, runStatus, shardEntry, shardsOf, withShard, type PublicShard } from './runs-shards';
 import { ndjsonLines, parseLine, type NdjsonLine } from './runs-ndjson';
@@ -87,6 +90,13 @@ async function store(header: PushHeader, lines: AsyncGenerator<NdjsonLine>, acce
 
   const ctx: RowContext = { runPk: run.id, paramColumns: run.paramColumns, range: manifest.range, lastIndex: -1 };
   const keepAfter = before?.lastIndex ?? -1;
+  const fast = fastLineReader(manifest.paramNames, run.paramColumns);
+  const valuesOf = (line: NdjsonLine): LineValues => {
+    const quick = fast?.(line.bytes, ctx, keepAfter);
+    if (quick) return quick;
+    const { rows, records } = rowsOfLine(parseLine(line), line.n, ctx, keepAfter);
+    return { values: rows.map(rowValues), records };
+  };
   let received = 0;
   let inserted = 0;
   // Inserts in flight: one executing, the next already sent (the connector pipelines commands on
@@ -96,12 +106,12 @@ async function store(header: PushHeader, lines: AsyncGenerator<NdjsonLine>, acce
   const insert = variantInserter(t);
   try {
     for await (const line of lines) {
-      const { rows, records } = rowsOfLine(parseLine(line), line.n, ctx, keepAfter);
+      const { values, records } = valuesOf(line);
       received += records;
-      if (!rows.length) continue;
+      if (!values.length) continue;
       if (pending.length >= IN_FLIGHT) await pending.shift();
-      inserted += rows.length;
-      const p = insert(rows);
+      inserted += values.length;
+      const p = insert(values);
       p.catch(() => undefined); // handled: awaited above or below, never left to crash the process
       pending.push(p);
     }

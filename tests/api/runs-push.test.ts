@@ -6,6 +6,7 @@
 import { randomUUID } from 'node:crypto';
 import http from 'node:http';
 import type { AddressInfo } from 'node:net';
+import { QueryTypes } from 'sequelize';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { addToSummary, emptySummary, summaryInputFromJson, type SweepSummary } from '../../shared/sweep/summary';
 import { studyHash } from '../../shared/sweep/variant-id';
@@ -65,6 +66,31 @@ describe('push', () => {
     expect([v.variantId, v.p2, v.p3, v.status, v.peakCompression, v.peakTensionMember]).toEqual([rec.id, rec.params.depth, rec.params.panels, rec.status, rec.peakCompression?.value ?? null, rec.peakTension?.member ?? null]);
     expect((run.summary as SweepSummary).byStatus).toEqual(big.summary.byStatus);
     expect(await AuditLog.count({ where: { action: 'run.push', entityId: run.runId } })).toBe(1);
+  });
+
+  it('stores the same rows from lines in another layout (read by JSON.parse and the schema), alone or mixed with the CLI layout in one push', async () => {
+    // White space after every colon: valid NDJSON that the byte reader of the CLI layout hands on.
+    const spaced = (l: string) => JSON.stringify(JSON.parse(l), null, 1).replace(/\n */g, ' ');
+    const stored = async (runId: string) => {
+      const run = (await Run.findOne({ where: { runId } }))!;
+      const rows = await Variant.findAll({ where: { runPk: run.id }, order: [['index', 'ASC']], raw: true });
+      return rows.map(({ id: _id, runPk: _run, ...rest }) => rest);
+    };
+    const want = await stored(big.manifest.runId);
+    expect(want).toHaveLength(3600);
+    for (const lines of [big.lines.map(spaced), big.lines.map((l, i) => (i >= 2500 ? spaced(l) : l))]) {
+      const header = fresh(big, `push test, layout ${randomUUID()}`);
+      await push(pushBody(big, { header, lines })).expect(201);
+      expect(await stored((header.manifest as { runId: string }).runId)).toEqual(want);
+    }
+  });
+
+  it('the variants table has no CHECK but json_valid(params), the one the bulk insert may skip (runs-insert.ts)', async () => {
+    const checks = await Run.sequelize!.query<{ clause: string }>(
+      "SELECT CHECK_CLAUSE AS clause FROM information_schema.CHECK_CONSTRAINTS WHERE CONSTRAINT_SCHEMA = DATABASE() AND TABLE_NAME = 'variants'",
+      { type: QueryTypes.SELECT },
+    );
+    expect(checks.map((c) => c.clause)).toEqual(['json_valid(`params`)']);
   });
 
   it('is idempotent: the same run again changes nothing', async () => {
@@ -139,6 +165,17 @@ describe('push failures store nothing', () => {
     const before = await counts();
     const res = await push(pushBody(big, { header: fresh(big, 'push test, cut'), lines: big.lines.slice(0, 2500) })).expect(422);
     expect(res.body.error).toMatchObject({ code: 'push-incomplete', details: [{ path: 'summary.evaluated' }] });
+    expect(await counts()).toEqual(before);
+  });
+
+  it('a variant the run already holds (a shard claiming the range of another): 409, rolled back', async () => {
+    const study = roofStudy('push test, overlapping shards', { depth: { from: 1, to: 3, count: 10 }, panels: [6, 8], supports: ['pin-roller'] });
+    const [one, two] = ['1/2', '2/2'].map((s) => sweep(study, s));
+    await push(pushBody(one)).expect(201);
+    const before = await counts();
+    const header = runLine(two, { manifest: { ...two.manifest, range: one.manifest.range }, summary: one.summary });
+    const res = await push(pushBody(two, { header, lines: one.lines })).expect(409);
+    expect(res.body.error.code).toBe('variant-exists');
     expect(await counts()).toEqual(before);
   });
 
