@@ -24,20 +24,25 @@ export function sweepSummaryText(s: SweepSummary, meta: { study: string; out: st
     const { figure, sense } = s.objective;
     const unit = FIG_UNIT[figure] ? ` (${FIG_UNIT[figure]})` : '';
     out.push('', `BEST ${s.best.length} by ${sense} ${figure}${unit}`);
-    const shownParams = meta.paramNames.filter((n) => new Set(s.best.map((e) => String(e.params[n]))).size > 1);
+    const shownParams = meta.paramNames.filter((n) => new Set(s.best.map((e) => shown(e.params[n]))).size > 1);
     out.push(table(
       [{ head: '#' }, { head: 'id' }, ...shownParams.map((n) => ({ head: n, right: true })), { head: 'status' }, { head: `${figure}${unit}`, right: true }, { head: 'tension kN', right: true }, { head: 'compr. kN', right: true }, { head: 'span/defl.', right: true }, ...(s.design ? [{ head: 'weight kN', right: true }, { head: 'max util.', right: true }] : [])],
-      s.best.map((e) => [String(e.index), e.id, ...shownParams.map((n) => String(e.params[n])), e.status, num(e.value, figure === 'maxDisplacement' ? 4 : 1), num(e.peakTension, 1), num(e.peakCompression, 1), Number.isFinite(e.spanOverDeflection) ? num(e.spanOverDeflection, 0) : '—', ...(s.design ? [num(e.weight ?? NaN, 2), num(e.maxUtilisation ?? NaN, 3)] : [])]),
+      s.best.map((e) => [String(e.index), e.id, ...shownParams.map((n) => shown(e.params[n])), e.status, num(e.value, figure === 'maxDisplacement' ? 4 : 1), num(e.peakTension, 1), num(e.peakCompression, 1), Number.isFinite(e.spanOverDeflection) ? num(e.spanOverDeflection, 0) : '—', ...(s.design ? [num(e.weight ?? NaN, 2), num(e.maxUtilisation ?? NaN, 3)] : [])]),
     ));
   }
   if (s.reasons.length) {
     out.push('', 'UNSTABLE OR FAILED, AND WHY');
     for (const r of s.reasons) {
-      const ex = meta.paramNames.map((n) => `${n}=${r.example.params[n]}`).join(' ');
+      const ex = meta.paramNames.map((n) => `${n}=${shown(r.example.params[n])}`).join(' ');
       out.push(`  ${r.count.toLocaleString('en-US')} × ${r.status}: ${r.reason}`, `      e.g. #${r.example.index} ${r.example.id} (${ex})`);
     }
   }
   out.push('', `Results in ${meta.out}/ (variants.jsonl, variants.csv, summary.json; forces kN, lengths m).`);
   out.push('Preliminary study figures: connections, bracing, fatigue and vibration are not checked; review by a licensed engineer.');
   return out.join('\n') + '\n';
+}
+
+/** A parameter value for a table: six significant digits at most (the id names the exact variant; the files keep every digit). */
+function shown(v: unknown): string {
+  return typeof v === 'number' && Number.isFinite(v) && !Number.isInteger(v) ? String(Number(v.toPrecision(6))) : String(v);
 }
