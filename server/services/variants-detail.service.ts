@@ -13,7 +13,8 @@ import { Study } from '../db/models/study.model';
 import type { ProjectAccess } from '../http/context';
 import { notFound } from '../http/http-error';
 import { findRun } from './runs.service';
-import { checkFigures, type FigureCheck } from './variants-check';
+import { checkFigures, checkRecord, type FigureCheck } from './variants-check';
+import { VariantEvaluator } from '../../shared/sweep/evaluate';
 import { ITEM_COLUMNS, marksOf, selectItems, type PublicMark, type VariantItem } from './variants-sql';
 
 export interface VariantDetail {
@@ -68,5 +69,9 @@ export async function variantDetail(access: ProjectAccess, runId: string, indexT
     return { variant, model: built.model, analysis: null, check: { matches: false, differences: [{ field: 'model', stored: item.status, recomputed: null, message }] } };
   }
   const analysis = analysisJson(checked.structure, analyze(checked.structure), checked.units);
-  return { variant, model: built.model, analysis, check: checkFigures(item, analysis) };
+  // A sized study's figures come from the sections the sizer chose: check them against the sweep's
+  // own evaluation of this variant, which sizes it again (the model shown keeps the study's section).
+  const setup = resolvedStudy(study).setup!;
+  const check = setup.design ? checkRecord(item, new VariantEvaluator(setup).evaluate(item.index)) : checkFigures(item, analysis);
+  return { variant, model: built.model, analysis, check };
 }

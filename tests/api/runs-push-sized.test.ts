@@ -6,6 +6,8 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { cleanRuns, pushBody, roofStudy, sweep, type SweptRun } from './support/run-fixtures';
 import { startTestApp, type TestApp } from './support/test-app';
 import { buildWorld, type World } from './support/world';
+import { Run } from '../../server/db/models/run.model';
+import { Variant } from '../../server/db/models/variant.model';
 
 let t: TestApp;
 let w: World;
@@ -40,5 +42,23 @@ describe('a pushed sized run', () => {
     }
     const weights = (res.body.items as { weight: number | null }[]).map((v) => v.weight).filter((x): x is number => x !== null);
     expect(weights).toEqual([...weights].sort((a, b) => a - b));
+  });
+
+  it('the server re-sizes a variant to check its pushed figures, and says where one differs', async () => {
+    const base = `/api/projects/${w.project.slug}/runs/${run.manifest.runId}/variants`;
+    for (const status of ['determinate', 'unstable']) {
+      const r = run.records.find((x) => x.status === status)!;
+      const body = (await w.as('viewer').get(`${base}/${r.index}`).expect(200)).body;
+      expect([status, body.check]).toEqual([status, { matches: true, differences: [] }]);
+    }
+    const r = run.records.find((x) => x.status === 'determinate')!;
+    const dbRun = (await Run.findOne({ where: { runId: run.manifest.runId } }))!;
+    await Variant.update({ maxDisplacement: r.maxDisplacement!.value * 2 }, { where: { runPk: dbRun.id, index: r.index } });
+    try {
+      const body = (await w.as('viewer').get(`${base}/${r.index}`).expect(200)).body;
+      expect(body.check.differences).toEqual([{ field: 'maxDisplacement', stored: r.maxDisplacement!.value * 2, recomputed: expect.closeTo(r.maxDisplacement!.value, 8) }]);
+    } finally {
+      await Variant.update({ maxDisplacement: r.maxDisplacement!.value }, { where: { runPk: dbRun.id, index: r.index } });
+    }
   });
 });
