@@ -102,9 +102,9 @@ export class VariantEvaluator {
    */
   evaluate(index: number): VariantRecord | undefined {
     const { plan, family } = this.setup;
-    const p = variantAt(plan, index, this.scratch);
+    const p = variantAt(plan, index, this.scratch, this.slots.digits);
     if (!passes(plan, p)) return undefined;
-    this.slots.read(index, p);
+    this.slots.read(p);
     const r = this.record;
     r.index = index;
     r.params = p;

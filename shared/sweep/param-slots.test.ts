@@ -42,8 +42,8 @@ describe('ParamSlots: the values of a variant by parameter index', () => {
     const slots = new ParamSlots(plan, plan.paramNames);
     const p = {};
     for (let i = 0; i < plan.size; i++) {
-      variantAt(plan, i, p);
-      slots.read(i, p);
+      variantAt(plan, i, p, slots.digits);
+      slots.read(p);
       expect(slots.values).toEqual(plan.paramNames.map((n) => (p as Record<string, unknown>)[n]));
     }
   });
@@ -58,8 +58,8 @@ describe('ParamSlots: the values of a variant by parameter index', () => {
     const p = {};
     for (let pass = 0; pass < 2; pass++) {
       for (let i = 0; i < plan.size; i++) {
-        variantAt(plan, i, p);
-        slots.read(i, p);
+        variantAt(plan, i, p, slots.digits);
+        slots.read(p);
         plan.paramNames.forEach((n, k) => expect(cache.get(k)).toBe(`${n}=${(p as Record<string, unknown>)[n]}`));
       }
     }

@@ -16,7 +16,7 @@ export class ParamSlots {
   readonly dim: Int32Array;
   /** Per parameter: its column in the dimension. */
   readonly col: Int32Array;
-  /** The digit of every dimension of the last `read`. */
+  /** The digit of every dimension of the current variant: pass it to `variantAt`. */
   readonly digits: Int32Array;
   /** The values of the last `read`, by parameter index. */
   readonly values: ParamValue[];
@@ -42,16 +42,9 @@ export class ParamSlots {
     this.values = names.map((n) => plan.base[n]);
   }
 
-  /** Decode variant `index` (mixed radix, last dimension fastest, as `variantAt`) and read its values. */
-  read(index: number, p: Readonly<Params>): void {
+  /** Read the values of the variant `variantAt(plan, index, p, slots.digits)` just filled. */
+  read(p: Readonly<Params>): void {
     const { dimensions } = this.plan;
-    let rest = index;
-    for (let d = dimensions.length - 1; d >= 0; d--) {
-      const size = dimensions[d].size;
-      const digit = rest % size;
-      rest = (rest - digit) / size;
-      this.digits[d] = digit;
-    }
     for (let i = 0; i < this.values.length; i++) {
       const d = this.dim[i];
       if (d >= 0) this.values[i] = dimensions[d].columns[this.col[i]][this.digits[d]];

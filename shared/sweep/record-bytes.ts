@@ -226,8 +226,6 @@ export class RecordEncoder {
   private readonly nameKeys: Uint8Array[];
   private readonly values: Map<number | string, ValueText>[];
   private readonly reasons = new Map<string, ValueText>();
-  /** Per parameter, the value written last and its text. */
-  private readonly last: ({ value: number | string | undefined; text: ValueText } | undefined)[];
 
   /** With slots: parameter texts by dimension digit, read for the variant the slots last read. */
   private readonly bySlot?: ValueCache<ValueText>;
@@ -240,20 +238,10 @@ export class RecordEncoder {
     this.names = paramNames;
     this.nameKeys = paramNames.map((n, i) => bytesOf(`${i ? ',' : ''}${JSON.stringify(n)}:`));
     this.values = paramNames.map(() => new Map());
-    this.last = paramNames.map(() => undefined);
     if (slots && plan) this.bySlot = new ValueCache(slots, (_i, v) => valueTextOf(v), plan);
   }
 
   private valueText(i: number, v: number | string | undefined): ValueText {
-    // All but the fastest-changing parameter repeat the previous variant's value.
-    const last = this.last[i];
-    if (last !== undefined && last.value === v) return last.text;
-    const t = this.lookUp(i, v);
-    this.last[i] = { value: v, text: t };
-    return t;
-  }
-
-  private lookUp(i: number, v: number | string | undefined): ValueText {
     const cache = this.values[i];
     const key = v ?? '';
     let t = cache.get(key);

@@ -94,10 +94,11 @@ export function spaceSize(plan: SpacePlan): number {
  * fails later as a data point, the sweep goes on.
  * @param index - 0 ≤ index < spaceSize(plan)
  * @param out - an object to fill and return, reused across calls to avoid allocation
+ * @param digits - if given, receives each dimension's digit of `index` (see param-slots.ts)
  * @returns `out`, with every family parameter and study name, each in its own unit
  */
-export function variantAt(plan: SpacePlan, index: number, out: Params = {}): Params {
-  fill(plan, index, out);
+export function variantAt(plan: SpacePlan, index: number, out: Params = {}, digits?: Int32Array): Params {
+  fill(plan, index, out, undefined, digits);
   return out;
 }
 
@@ -136,7 +137,7 @@ export function passes(plan: SpacePlan, params: Readonly<Params>): boolean {
   return true;
 }
 
-function fill(plan: SpacePlan, index: number, out: Params, issues?: Issue[]): void {
+function fill(plan: SpacePlan, index: number, out: Params, issues?: Issue[], digits?: Int32Array): void {
   if (!(Number.isInteger(index) && index >= 0 && index < plan.size)) {
     throw new RangeError(`variant index ${index} is outside 0..${plan.size - 1}`);
   }
@@ -152,6 +153,7 @@ function fill(plan: SpacePlan, index: number, out: Params, issues?: Issue[]): vo
     const dim = dimensions[d];
     const digit = rest % dim.size;
     rest = (rest - digit) / dim.size;
+    if (digits) digits[d] = digit;
     for (let k = 0; k < dim.names.length; k++) {
       const v = dim.columns[k][digit];
       out[dim.names[k]] = v;

@@ -207,9 +207,6 @@ export class VariantIdHasher {
   private readonly start: string;
   private readonly ascii: boolean;
   private readonly hash = new Fnv64Ascii();
-  /** Per key, the value hashed last and its canonical text ('' before the first). */
-  private readonly lastValue: ParamValue[];
-  private readonly lastText: string[];
   /** With slots: per key, its parameter index, and the canonical texts by dimension digit. */
   private readonly keyParam?: Int32Array;
   private readonly canonical?: ValueCache<string>;
@@ -223,8 +220,6 @@ export class VariantIdHasher {
     this.keys = sortedOnce(names);
     this.prefixes = this.keys.map((k) => `;${k}=`);
     this.texts = this.keys.map(() => new Map());
-    this.lastValue = this.keys.map(() => NaN);
-    this.lastText = this.keys.map(() => '');
     this.start = quoted(family);
     this.ascii = isAscii(this.start) && this.prefixes.every(isAscii);
     this.afterFamily.feed(this.start);
@@ -244,19 +239,12 @@ export class VariantIdHasher {
     h.copy(this.afterFamily);
     for (let i = 0; i < this.keys.length; i++) {
       const v = params[this.keys[i]];
-      let t: string | undefined;
-      // All but the fastest-changing parameter repeat the previous variant's value.
-      if (this.lastValue[i] === v && this.lastText[i] !== '') t = this.lastText[i];
-      else {
-        const cache = this.texts[i];
-        t = cache.get(v);
-        if (t === undefined) {
-          t = typeof v === 'number' ? canonicalNumber(v) : quoted(v);
-          if (!isAscii(t)) return variantId(this.family, params, this.names);
-          if (cache.size < 65536) cache.set(v, t);
-        }
-        this.lastValue[i] = v;
-        this.lastText[i] = t;
+      const cache = this.texts[i];
+      let t = cache.get(v);
+      if (t === undefined) {
+        t = typeof v === 'number' ? canonicalNumber(v) : quoted(v);
+        if (!isAscii(t)) return variantId(this.family, params, this.names);
+        if (cache.size < 65536) cache.set(v, t);
       }
       h.feed(this.prefixes[i]);
       h.feed(t);
