@@ -18,6 +18,8 @@ export interface FigureDifference {
 export interface FigureCheck {
   matches: boolean;
   differences: FigureDifference[];
+  /** What the check compared against, when the model shown is not that (a sized study). */
+  note?: string;
 }
 
 const FORCE_TOL = 2e-6; // kN

@@ -50,6 +50,8 @@ function rebuild(study: Study, v: VariantItem): { model: Model } | { reason: str
   }
 }
 
+const SIZED_NOTE = 'Checked against the sweep engine sizing this variant again. The drawing and member table below use the study\'s one section and its self-weight, not the sized sections: read the sized figures from the run\'s table.';
+
 export async function variantDetail(access: ProjectAccess, runId: string, indexText: string): Promise<VariantDetail> {
   const run = await findRun(access, runId);
   const index = /^\d{1,9}$/.test(indexText) ? Number(indexText) : -1;
@@ -72,6 +74,8 @@ export async function variantDetail(access: ProjectAccess, runId: string, indexT
   // A sized study's figures come from the sections the sizer chose: check them against the sweep's
   // own evaluation of this variant, which sizes it again (the model shown keeps the study's section).
   const setup = resolvedStudy(study).setup!;
-  const check = setup.design ? checkRecord(item, new VariantEvaluator(setup).evaluate(item.index)) : checkFigures(item, analysis);
+  const check = setup.design
+    ? { ...checkRecord(item, new VariantEvaluator(setup).evaluate(item.index)), note: SIZED_NOTE }
+    : checkFigures(item, analysis);
   return { variant, model: built.model, analysis, check };
 }

@@ -122,6 +122,8 @@ export interface FigureDifference {
 export interface RecomputeCheck {
   matches: boolean;
   differences: FigureDifference[];
+  /** What the check compared against, when the page's drawing is not that (a sized study). */
+  note?: string;
 }
 
 export interface VariantDetailDto {

@@ -32,6 +32,7 @@ export function RecomputeCheck({ check }: { check: Check }) {
           )}
         </>
       )}
+      {check.note && <p data-testid="recompute-note" className="m-0 mt-1 text-ink-2">{check.note}</p>}
     </section>
   );
 }
